@@ -1,0 +1,62 @@
+import { spawn } from 'node:child_process';
+import { SetupError } from './log.mjs';
+
+/** Runs a command to completion with inherited output; rejects on a non-zero exit. */
+export function run(command, args, { env = process.env, quiet = false } = {}) {
+  return new Promise((resolve, reject) => {
+    const child = spawn(command, args, { env, stdio: quiet ? ['ignore', 'pipe', 'pipe'] : 'inherit' });
+    let output = '';
+    child.stdout?.on('data', (chunk) => (output += chunk));
+    child.stderr?.on('data', (chunk) => (output += chunk));
+    child.on('error', reject);
+    child.on('exit', (code, signal) =>
+      code === 0 ? resolve(output) : reject(new SetupError(`${command} ${args.join(' ')} failed (${signal ?? `exit ${code}`})\n${output.slice(-2000)}`)),
+    );
+  });
+}
+
+/**
+ * Starts a long-running child in its own process group, so that Ctrl-C in the terminal reaches
+ * only us and we stop the children in order, and so that stopping it also stops its children.
+ */
+export function startService(command, args, { env = process.env, stdio = 'inherit' } = {}) {
+  const child = spawn(command, args, { env, stdio, detached: true });
+  const exited = new Promise((resolve) => child.on('exit', (code, signal) => resolve({ code, signal })));
+  return {
+    child,
+    exited,
+    async stop(timeoutMs = 10_000) {
+      if (child.exitCode !== null || child.signalCode !== null) return;
+      signalGroup(child.pid, 'SIGTERM');
+      const timer = setTimeout(() => signalGroup(child.pid, 'SIGKILL'), timeoutMs);
+      await exited;
+      clearTimeout(timer);
+    },
+  };
+}
+
+function signalGroup(pid, signal) {
+  try {
+    process.kill(-pid, signal);
+  } catch {
+    // already gone
+  }
+}
+
+export function isAlive(pid) {
+  try {
+    process.kill(pid, 0);
+    return true;
+  } catch (error) {
+    return error.code === 'EPERM';
+  }
+}
+
+export async function waitFor(check, { timeoutMs, intervalMs = 200, what }) {
+  const deadline = Date.now() + timeoutMs;
+  for (;;) {
+    if (await check()) return;
+    if (Date.now() > deadline) throw new SetupError(`Timed out waiting for ${what}`);
+    await new Promise((resolve) => setTimeout(resolve, intervalMs));
+  }
+}

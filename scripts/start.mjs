@@ -1,0 +1,81 @@
+/**
+ * `npm start` (and `npm run dev` with --dev): everything from a fresh machine to a running
+ * board — dependencies, the private MariaDB, migrations, the demo seed, the client build and
+ * the server — and a clean shutdown of all of it on Ctrl-C.
+ */
+import os from 'node:os';
+import path from 'node:path';
+import { ensureDependencies } from './lib/dependencies.mjs';
+import { fail, step } from './lib/log.mjs';
+
+const dev = process.argv.includes('--dev');
+const services = [];
+let stopping = false;
+
+async function stopAll(exitCode) {
+  if (stopping) return;
+  stopping = true;
+  step('Stopping…');
+  // The server first (it holds database connections), the database last.
+  for (const service of services.reverse()) await service.stop();
+  process.exit(exitCode);
+}
+process.on('SIGINT', () => stopAll(0));
+process.on('SIGTERM', () => stopAll(0));
+
+async function main() {
+  await ensureDependencies();
+  // Loaded after the install step: these import packages that may not have been there before.
+  const { startPrivateMariaDb } = await import('./lib/mariadb.mjs');
+  const { ensureClientBuild } = await import('./lib/client-build.mjs');
+  const { run, startService, waitFor } = await import('./lib/processes.mjs');
+  const { sessionSecret } = await import('./lib/session-secret.mjs');
+
+  const dataDir = path.resolve(process.env.DATA_DIR ?? './data');
+  const port = Number(process.env.PORT ?? 5180);
+  const env = { ...process.env, DATA_DIR: dataDir, PORT: String(port), SESSION_SECRET: sessionSecret(dataDir) };
+  if (!process.env.DATABASE_URL) {
+    const dbPort = Number(process.env.DB_PORT ?? 3307);
+    services.push(await startPrivateMariaDb({ dataDir, port: dbPort, database: 'pitwright', user: 'pitwright', password: 'pitwright' }));
+    env.DB_PORT = String(dbPort);
+  } else {
+    step('Using the database at DATABASE_URL (no private MariaDB started).');
+  }
+  if (stopping) return;
+
+  step('Preparing the database (migrations, demo seed on first run)…');
+  await run(process.execPath, ['--import', 'tsx', 'server/db/prepare.ts'], { env });
+  if (!dev) await ensureClientBuild();
+
+  const serverArgs = dev ? ['--watch-path=server', '--watch-path=shared', '--import', 'tsx', 'server/index.ts'] : ['--import', 'tsx', 'server/index.ts'];
+  const server = startService(process.execPath, serverArgs, { env });
+  services.push(server);
+  server.exited.then(({ code }) => !stopping && (console.error(`The server stopped (exit ${code}).`), stopAll(1)));
+  await waitFor(() => fetch(`http://127.0.0.1:${port}/api/health`).then((r) => r.ok, () => false), { timeoutMs: 60_000, what: 'the server' });
+
+  let url = `http://localhost:${port}`;
+  if (dev) {
+    services.push(startService(process.execPath, ['node_modules/vite/bin/vite.js', '--host', '--strictPort'], { env }));
+    url = 'http://localhost:5173 (Vite, with hot reload)';
+  }
+  printWelcome(url, port);
+}
+
+function printWelcome(url, port) {
+  const lan = Object.values(os.networkInterfaces())
+    .flat()
+    .filter((address) => address && address.family === 'IPv4' && !address.internal)
+    .map((address) => `http://${address.address}:${port}`);
+  console.log(`\n  Pitwright is running: ${url}`);
+  if (lan.length) console.log(`  Tablets on the same network: ${lan.join('  ')}`);
+  if (process.env.NODE_ENV !== 'production') {
+    console.log('\n  Demo sign-ins (password: pitwright-demo):');
+    for (const role of ['admin', 'lead', 'crew', 'battery', 'safety', 'viewer']) console.log(`    ${role.padEnd(8)} ${role}@demo.pitwright.test`);
+  }
+  console.log('\n  Ctrl-C stops the server and the database.\n');
+}
+
+main().catch(async (error) => {
+  fail(error);
+  await stopAll(1);
+});

@@ -1,0 +1,76 @@
+import fs from 'node:fs';
+import path from 'node:path';
+import express, { Router } from 'express';
+import session from 'express-session';
+import helmet from 'helmet';
+import { csrfSync } from 'csrf-sync';
+import type { Sequelize } from 'sequelize';
+import type { Config } from './config';
+import { createPassport } from './auth/passport';
+import { requireAuth } from './auth/require-auth';
+import { SessionStore } from './auth/session-store';
+import { apiNotFound, errorHandler } from './middleware/error-handler';
+import { initModels } from './models';
+import { eventsRouter } from './routes/events';
+import { healthRouter } from './routes/health';
+import { sessionRouter } from './routes/session';
+import { teamRouter } from './routes/team';
+
+export const SESSION_COOKIE = 'pitwright.sid';
+
+/** The Express app without a listening socket: what the server and Supertest both use. */
+export function createApp({ config, sequelize }: { config: Config; sequelize: Sequelize }) {
+  initModels(sequelize);
+  const app = express();
+  app.disable('x-powered-by');
+  if (config.trustProxy) app.set('trust proxy', config.trustProxy);
+  app.use(
+    helmet({
+      // A pit network is often plain http on a LAN: never rewrite requests to https.
+      contentSecurityPolicy: { directives: { upgradeInsecureRequests: null } },
+      strictTransportSecurity: false,
+    }),
+  );
+
+  const store = new SessionStore(sequelize, config.sessionIdleMs);
+  const sessionMiddleware = session({
+    name: SESSION_COOKIE,
+    secret: config.sessionSecret,
+    store,
+    resave: false,
+    saveUninitialized: false,
+    rolling: true,
+    cookie: { httpOnly: true, sameSite: 'lax', secure: 'auto', maxAge: config.sessionIdleMs },
+  });
+  const passport = createPassport();
+  const csrf = csrfSync({
+    getTokenFromRequest: (req) => req.get('x-csrf-token'),
+    // Signed-out callers have nothing to forge (requireAuth answers 401); sign-in makes the token.
+    skipCsrfProtection: (req) => !req.user || (req.method === 'POST' && req.path === '/session'),
+    errorConfig: { code: 'EBADCSRFTOKEN' },
+  });
+
+  const api = Router();
+  api.use('/health', healthRouter(() => sequelize.authenticate()));
+  api.use(express.json({ limit: '1mb' }), sessionMiddleware, passport.initialize(), passport.session());
+  api.use(csrf.csrfSynchronisedProtection);
+  api.use('/session', sessionRouter({ passport, csrf, cookieName: SESSION_COOKIE }));
+  api.use('/team', requireAuth, teamRouter());
+  api.use('/events', requireAuth, eventsRouter());
+  api.use(apiNotFound);
+  app.use('/api', api);
+
+  serveClient(app, config.clientDir);
+  app.use(errorHandler);
+  return { app, sessionMiddleware, passport, close: () => store.close() };
+}
+
+function serveClient(app: express.Express, clientDir: string) {
+  const indexHtml = path.join(clientDir, 'index.html');
+  if (!fs.existsSync(indexHtml)) return;
+  app.use('/assets', express.static(path.join(clientDir, 'assets'), { immutable: true, maxAge: '1y' }));
+  app.use(express.static(clientDir, { index: false }));
+  app.get('/{*splat}', (_req, res) => {
+    res.set('Cache-Control', 'no-cache').sendFile(indexHtml);
+  });
+}

@@ -1,0 +1,22 @@
+import type { CreateEventInput } from '../../shared/schemas/events';
+import { inTransaction } from '../db/transaction';
+import { HttpError } from '../errors';
+import { Event, Team } from '../models';
+
+/**
+ * Creates an event for a team; the team's first event, or one asked for as current, becomes
+ * the current one. Resending the same `id` returns the event the first call made.
+ */
+export async function createEvent(teamId: string, { id, current, ...fields }: CreateEventInput) {
+  return inTransaction(async (transaction) => {
+    const team = await Team.findByPk(teamId, { transaction, lock: transaction.LOCK.UPDATE, rejectOnEmpty: true });
+    if (id) {
+      const existing = await Event.findByPk(id, { transaction });
+      if (existing?.teamId === teamId) return { event: existing, team, created: false };
+      if (existing) throw new HttpError(409, 'id_taken', 'This id is already used by another record');
+    }
+    const event = await Event.create({ id, teamId, ...fields }, { transaction });
+    if (current || !team.currentEventId) await team.update({ currentEventId: event.id }, { transaction });
+    return { event, team, created: true };
+  });
+}

@@ -1,0 +1,19 @@
+import type { UpdateEventInput } from '../../shared/schemas/events';
+import { inTransaction } from '../db/transaction';
+import { notFound, stale } from '../errors';
+import { Event, Team } from '../models';
+import { presentEvent } from '../presenters/event';
+
+/** Edits an event (refusing a stale `version`) and, with `current: true`, makes it current. */
+export async function updateEvent(teamId: string, eventId: string, { current, version, ...fields }: UpdateEventInput) {
+  return inTransaction(async (transaction) => {
+    const team = await Team.findByPk(teamId, { transaction, lock: transaction.LOCK.UPDATE, rejectOnEmpty: true });
+    const event = await Event.findOne({ where: { id: eventId, teamId }, transaction, lock: transaction.LOCK.UPDATE });
+    if (!event) throw notFound('Event');
+    if (version !== undefined && version !== event.version) throw stale(presentEvent(event, team.currentEventId));
+    event.set(fields);
+    if (event.changed()) await event.save({ transaction });
+    if (current) await team.update({ currentEventId: event.id }, { transaction });
+    return { event, team };
+  });
+}

@@ -1,0 +1,20 @@
+import { Umzug, SequelizeStorage, type MigrationParams } from 'umzug';
+import type { QueryInterface, Sequelize } from 'sequelize';
+import * as foundation from './migrations/20261201-0001-foundation';
+
+// Listed by hand, in order: a glob would change meaning with the build layout.
+const MIGRATIONS = [{ name: '20261201-0001-foundation', ...foundation }];
+
+/** The migrator for one database; `up()` applies what is missing, `down()` steps back. */
+export function createMigrator(sequelize: Sequelize) {
+  return new Umzug({
+    migrations: MIGRATIONS.map(({ name, up, down }) => ({
+      name,
+      up: ({ context }: MigrationParams<QueryInterface>) => up({ context }),
+      down: ({ context }: MigrationParams<QueryInterface>) => down({ context }),
+    })),
+    context: sequelize.getQueryInterface(),
+    storage: new SequelizeStorage({ sequelize, tableName: 'schema_migrations' }),
+    logger: undefined,
+  });
+}

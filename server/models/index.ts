@@ -1,0 +1,23 @@
+import type { Sequelize } from 'sequelize';
+import { Event } from './event';
+import { Membership } from './membership';
+import { SessionRecord } from './session-record';
+import { Team } from './team';
+import { User } from './user';
+
+export { Event, Membership, SessionRecord, Team, User };
+
+let boundTo: Sequelize | undefined;
+
+/** Binds every model to one connection; a process talks to one database. */
+export function initModels(sequelize: Sequelize) {
+  if (boundTo === sequelize) return;
+  if (boundTo) throw new Error('Models are already bound to another database connection');
+  boundTo = sequelize;
+  for (const model of [Team, User, Membership, Event, SessionRecord]) model.initModel(sequelize);
+  Membership.belongsTo(Team, { foreignKey: 'teamId', as: 'team' });
+  Membership.belongsTo(User, { foreignKey: 'userId', as: 'user' });
+  Team.hasMany(Membership, { foreignKey: 'teamId', as: 'memberships' });
+  User.hasMany(Membership, { foreignKey: 'userId', as: 'memberships' });
+  Event.belongsTo(Team, { foreignKey: 'teamId', as: 'team' });
+}

@@ -1,0 +1,12 @@
+import { z } from 'zod';
+
+/** A client may choose a record's id so that resending a create cannot make a duplicate. */
+export const clientId = z.uuid({ message: 'Must be a UUID' });
+
+/** Body of every error answer: `{error: {code, message, fields?}}`. */
+export interface ApiError {
+  error: { code: string; message: string; fields?: Record<string, string> };
+}
+
+/** Optimistic-locking token carried by records that several tablets edit at once. */
+export const versionField = z.number().int().nonnegative();

@@ -1,0 +1,56 @@
+import { z } from 'zod';
+import { clientId, versionField } from './common';
+
+const isoDate = z.iso.date({ message: 'Use the form YYYY-MM-DD' });
+
+/** True when the runtime knows the IANA zone, e.g. `America/Chicago`. */
+export function isTimeZone(name: string): boolean {
+  try {
+    new Intl.DateTimeFormat('en-US', { timeZone: name });
+    return name.includes('/') || name === 'UTC';
+  } catch {
+    return false;
+  }
+}
+
+const eventFields = z.object({
+  name: z.string().trim().min(1, { message: 'Give the event a name' }).max(120),
+  venue: z.string().trim().min(1, { message: 'Give the venue' }).max(160),
+  timeZone: z.string().refine(isTimeZone, { message: 'Use an IANA time zone such as Europe/Berlin' }),
+  startDate: isoDate,
+  endDate: isoDate,
+  teamNumber: z.number({ message: 'A whole number' }).int({ message: 'A whole number' }).min(1).max(99999),
+});
+
+const endNotBeforeStart = (event: { startDate?: string; endDate?: string }) =>
+  !event.startDate || !event.endDate || event.endDate >= event.startDate;
+const endDateIssue = { message: 'Must not be before the start date', path: ['endDate'] };
+
+export const createEventSchema = eventFields
+  .extend({ id: clientId.optional(), current: z.boolean().optional() })
+  .refine(endNotBeforeStart, endDateIssue);
+export type CreateEventInput = z.infer<typeof createEventSchema>;
+
+export const updateEventSchema = eventFields
+  .partial()
+  .extend({
+    current: z.literal(true, { message: 'Only true: make another event current to replace it' }).optional(),
+    version: versionField.optional(),
+  })
+  .strict()
+  .refine(endNotBeforeStart, endDateIssue);
+export type UpdateEventInput = z.infer<typeof updateEventSchema>;
+
+export interface EventJson {
+  id: string;
+  name: string;
+  venue: string;
+  timeZone: string;
+  startDate: string;
+  endDate: string;
+  teamNumber: number;
+  current: boolean;
+  version: number;
+  createdAt: string;
+  updatedAt: string;
+}
