@@ -6,7 +6,7 @@
 import os from 'node:os';
 import path from 'node:path';
 import { ensureDependencies } from './lib/dependencies.mjs';
-import { fail, step } from './lib/log.mjs';
+import { fail, SetupError, step } from './lib/log.mjs';
 
 const dev = process.argv.includes('--dev');
 const services = [];
@@ -28,15 +28,19 @@ async function main() {
   // Loaded after the install step: these import packages that may not have been there before.
   const { startPrivateMariaDb } = await import('./lib/mariadb.mjs');
   const { ensureClientBuild } = await import('./lib/client-build.mjs');
-  const { run, startService, waitFor } = await import('./lib/processes.mjs');
+  const { portAnswers, run, startService, waitFor } = await import('./lib/processes.mjs');
   const { sessionSecret } = await import('./lib/session-secret.mjs');
 
   const dataDir = path.resolve(process.env.DATA_DIR ?? './data');
   const port = Number(process.env.PORT ?? 5180);
+  if (await portAnswers(port)) {
+    throw new SetupError(`Port ${port} is already in use: is Pitwright already running? Stop it, or set PORT to a free port.`);
+  }
   const env = { ...process.env, DATA_DIR: dataDir, PORT: String(port), SESSION_SECRET: sessionSecret(dataDir) };
   if (!process.env.DATABASE_URL) {
     const dbPort = Number(process.env.DB_PORT ?? 3307);
-    services.push(await startPrivateMariaDb({ dataDir, port: dbPort, database: 'pitwright', user: 'pitwright', password: 'pitwright' }));
+    const credentials = { database: env.DB_NAME ?? 'pitwright', user: env.DB_USER ?? 'pitwright', password: env.DB_PASSWORD ?? 'pitwright' };
+    services.push(await startPrivateMariaDb({ dataDir, port: dbPort, ...credentials }));
     env.DB_PORT = String(dbPort);
   } else {
     step('Using the database at DATABASE_URL (no private MariaDB started).');
@@ -48,7 +52,7 @@ async function main() {
   if (!dev) await ensureClientBuild();
 
   const serverArgs = dev ? ['--watch-path=server', '--watch-path=shared', '--import', 'tsx', 'server/index.ts'] : ['--import', 'tsx', 'server/index.ts'];
-  const server = startService(process.execPath, serverArgs, { env });
+  const server = startService(process.execPath, serverArgs, { env, ipc: true });
   services.push(server);
   server.exited.then(({ code }) => !stopping && (console.error(`The server stopped (exit ${code}).`), stopAll(1)));
   await waitFor(() => fetch(`http://127.0.0.1:${port}/api/health`).then((r) => r.ok, () => false), { timeoutMs: 60_000, what: 'the server' });

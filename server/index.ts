@@ -23,4 +23,6 @@ function shutdown() {
   server.closeAllConnections();
 }
 process.on('SIGTERM', shutdown);
+// Started by `npm start`: when that process is gone, so is the reason to run.
+process.on('disconnect', shutdown);
 process.on('SIGINT', shutdown);

@@ -1,21 +1,10 @@
 import crypto from 'node:crypto';
 import fs from 'node:fs';
-import net from 'node:net';
 import os from 'node:os';
 import path from 'node:path';
-import { isAlive, run, startService, waitFor } from './processes.mjs';
+import { isAlive, portAnswers, run, startService, waitFor } from './processes.mjs';
 import { SetupError, step, warn } from './log.mjs';
 import { ensureDebianPackage } from './system-packages.mjs';
-
-const portAnswers = (port) =>
-  new Promise((resolve) => {
-    const socket = net.connect({ host: '127.0.0.1', port });
-    socket.once('connect', () => {
-      socket.destroy();
-      resolve(true);
-    });
-    socket.once('error', () => resolve(false));
-  });
 
 // A Unix socket path must stay under ~107 bytes; deep checkouts get one in the temp folder.
 function socketPathFor(dir) {

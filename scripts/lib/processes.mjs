@@ -1,4 +1,5 @@
 import { spawn } from 'node:child_process';
+import net from 'node:net';
 import { SetupError } from './log.mjs';
 
 /** Runs a command to completion with inherited output; rejects on a non-zero exit. */
@@ -19,8 +20,10 @@ export function run(command, args, { env = process.env, quiet = false } = {}) {
  * Starts a long-running child in its own process group, so that Ctrl-C in the terminal reaches
  * only us and we stop the children in order, and so that stopping it also stops its children.
  */
-export function startService(command, args, { env = process.env, stdio = 'inherit' } = {}) {
-  const child = spawn(command, args, { env, stdio, detached: true });
+export function startService(command, args, { env = process.env, stdio = 'inherit', ipc = false } = {}) {
+  const streams = typeof stdio === 'string' ? [stdio, stdio, stdio] : stdio;
+  // An IPC channel closes when we die, even by SIGKILL: a child that listens for it never outlives us.
+  const child = spawn(command, args, { env, stdio: ipc ? [...streams, 'ipc'] : streams, detached: true });
   const exited = new Promise((resolve) => child.on('exit', (code, signal) => resolve({ code, signal })));
   return {
     child,
@@ -42,6 +45,17 @@ function signalGroup(pid, signal) {
     // already gone
   }
 }
+
+/** True when something on this machine already accepts connections on the port. */
+export const portAnswers = (port, host = '127.0.0.1') =>
+  new Promise((resolve) => {
+    const socket = net.connect({ host, port });
+    socket.once('connect', () => {
+      socket.destroy();
+      resolve(true);
+    });
+    socket.once('error', () => resolve(false));
+  });
 
 export function isAlive(pid) {
   try {

@@ -1,4 +1,5 @@
 import type { UpdateMemberInput } from '../../shared/schemas/team';
+import { hashPassword, temporaryPassword } from '../auth/passwords';
 import { endSessionsOf } from '../auth/session-store';
 import { inTransaction } from '../db/transaction';
 import type { Transaction } from 'sequelize';
@@ -7,11 +8,13 @@ import { Membership, User } from '../models';
 import { presentMember } from '../presenters/team';
 
 /**
- * Changes a member's name, roles or active state. Deactivation ends that member's sessions
- * after the commit; a team never loses its last active admin.
+ * Changes a member's name, roles or active state, or gives them a new temporary password.
+ * Deactivation and a reset end that member's sessions after the commit; a team never loses
+ * its last active admin; an account shared with another team keeps its password (that team's
+ * admins have no say here).
  */
 export async function updateMember(teamId: string, membershipId: string, input: UpdateMemberInput) {
-  const membership = await inTransaction(async (transaction) => {
+  const result = await inTransaction(async (transaction) => {
     const found = await Membership.findOne({
       where: { id: membershipId, teamId },
       include: [{ model: User, as: 'user' }],
@@ -29,12 +32,20 @@ export async function updateMember(teamId: string, membershipId: string, input: 
     if (input.roles) found.roles = input.roles;
     if (input.active !== undefined) found.active = input.active;
     if (input.name) found.user!.name = input.name;
+    let password: string | null = null;
+    if (input.resetPassword) {
+      if ((await Membership.count({ where: { userId: found.userId }, transaction })) > 1) {
+        throw new HttpError(409, 'shared_account', 'This account belongs to other teams too: its owner changes the password');
+      }
+      password = temporaryPassword();
+      found.user!.passwordHash = await hashPassword(password);
+    }
     await found.user!.save({ transaction });
     await found.save({ transaction });
-    return found;
+    return { membership: found, temporaryPassword: password };
   });
-  if (input.active === false) await endSessionsOf(membership.userId);
-  return membership;
+  if (input.active === false || input.resetPassword) await endSessionsOf(result.membership.userId);
+  return result;
 }
 
 async function countActiveAdmins(teamId: string, transaction: Transaction) {

@@ -15,7 +15,6 @@ const envSchema = z.object({
   SESSION_SECRET: z.string().min(16, 'SESSION_SECRET must be at least 16 characters'),
   SESSION_IDLE_HOURS: z.coerce.number().positive().default(12),
   TRUST_PROXY: z.string().optional(),
-  LOG_REQUESTS: z.stringbool().default(false),
 });
 
 export type Config = ReturnType<typeof loadConfig>;
@@ -38,7 +37,6 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env) {
     sessionSecret: vars.SESSION_SECRET,
     sessionIdleMs: vars.SESSION_IDLE_HOURS * 3_600_000,
     trustProxy: vars.TRUST_PROXY,
-    logRequests: vars.LOG_REQUESTS,
     clientDir: path.resolve('dist'),
   };
 }

@@ -44,8 +44,8 @@ export function teamRouter() {
     authorize(auth, 'members:manage');
     const { id } = memberParams.parse(req.params);
     const input = updateMemberSchema.parse(req.body);
-    const membership = await updateMember(auth.membership.teamId, id, input);
-    res.json(presentMember(membership));
+    const { membership, temporaryPassword } = await updateMember(auth.membership.teamId, id, input);
+    res.json(input.resetPassword ? { ...presentMember(membership), temporaryPassword } : presentMember(membership));
   });
 
   return router;

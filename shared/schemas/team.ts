@@ -18,6 +18,8 @@ export const updateMemberSchema = z
     name: memberName.optional(),
     roles: rolesField.optional(),
     active: z.boolean().optional(),
+    /** Replaces the member's password with a new temporary one, answered once. */
+    resetPassword: z.literal(true, { message: 'Only true' }).optional(),
     version: versionField.optional(),
   })
   .strict();
@@ -42,7 +44,7 @@ export interface MemberJson {
   createdAt: string;
 }
 
-/** Answer to adding a member: the temporary password is shown this once and never stored in clear. */
+/** Answer to adding a member or resetting a password: the temporary password is shown this once and never stored in clear. */
 export interface CreatedMemberJson extends MemberJson {
   temporaryPassword: string | null;
 }

@@ -2,6 +2,7 @@ import { afterAll } from 'vitest';
 import request from 'supertest';
 import { createApp } from '../../server/app';
 import { loadConfig } from '../../server/config';
+import { ROLES, type Role } from '../../shared/roles';
 import { createSequelize } from '../../server/db/sequelize';
 
 /**
@@ -41,3 +42,10 @@ export async function signIn(app: TestApp['app'], email: string, password: strin
   };
 }
 export type SignedIn = Awaited<ReturnType<typeof signIn>>;
+
+/** One signed-in client per role, e.g. for a factory team's `emails`. */
+export async function signInEveryRole(app: TestApp['app'], emails: Record<Role, string>, password: string) {
+  const clients = {} as Record<Role, SignedIn>;
+  for (const role of ROLES) clients[role] = await signIn(app, emails[role], password);
+  return clients;
+}

@@ -9,13 +9,14 @@ let passwordHash: Promise<string> | undefined;
 /** Fresh, unique e-mail: files share one database. */
 export const uniqueEmail = (label: string) => `${label}-${randomUUID().slice(0, 8)}@factory.pitwright.test`;
 
+const randomTeamNumber = () => 29000 + Math.floor(Math.random() * 900);
+
 /**
  * A team with one member per role (all sharing PASSWORD) and a current event. Returns the
  * e-mail of each role's member, keyed by role.
  */
-export async function makeTeam({ number = 29000 + Math.floor(Math.random() * 900) } = {}) {
-  passwordHash ??= hashPassword(PASSWORD);
-  const team = await Team.create({ number, name: `Factory Team ${number}` });
+export async function makeTeam({ number = randomTeamNumber() } = {}) {
+  const { team, emails, memberships } = await makeTeamWithoutEvent({ number });
   const event = await Event.create({
     teamId: team.id,
     name: `Factory Event ${number}`,
@@ -26,6 +27,14 @@ export async function makeTeam({ number = 29000 + Math.floor(Math.random() * 900
     teamNumber: number,
   });
   await team.update({ currentEventId: event.id });
+  return { team, event, emails, memberships };
+}
+export type FactoryTeam = Awaited<ReturnType<typeof makeTeam>>;
+
+/** Like makeTeam, but the team has no event yet (a team on its first day). */
+export async function makeTeamWithoutEvent({ number = randomTeamNumber() } = {}) {
+  passwordHash ??= hashPassword(PASSWORD);
+  const team = await Team.create({ number, name: `Factory Team ${number}` });
   const emails = {} as Record<Role, string>;
   const memberships = {} as Record<Role, Membership>;
   for (const role of ROLES) {
@@ -33,5 +42,16 @@ export async function makeTeam({ number = 29000 + Math.floor(Math.random() * 900
     memberships[role] = await Membership.create({ teamId: team.id, userId: user.id, roles: [role] });
     emails[role] = user.email;
   }
-  return { team, event, emails, memberships };
+  return { team, emails, memberships };
 }
+
+/** A valid body for POST /api/events; override any field. */
+export const eventBody = (overrides: Record<string, unknown> = {}) => ({
+  name: 'Lone Star Regional',
+  venue: 'George R. Brown Convention Center',
+  timeZone: 'America/Chicago',
+  startDate: '2027-03-04',
+  endDate: '2027-03-06',
+  teamNumber: 4321,
+  ...overrides,
+});

@@ -1,0 +1,56 @@
+import { beforeAll, describe, expect, it } from 'vitest';
+import request from 'supertest';
+import { signIn, testApp } from '../../support/app';
+import { makeTeam, PASSWORD } from '../../support/factories';
+
+const { app } = testApp();
+let team: Awaited<ReturnType<typeof makeTeam>>;
+beforeAll(async () => {
+  team = await makeTeam();
+});
+
+describe('PATCH /api/team/members/:id {resetPassword: true}', () => {
+  it('is for admins only', async () => {
+    const lead = await signIn(app, team.emails.lead, PASSWORD);
+    const answer = await lead.patch(`/api/team/members/${team.memberships.viewer.id}`, { resetPassword: true });
+    expect(answer.status).toBe(403);
+    expect(answer.body.error.code).toBe('forbidden');
+  });
+
+  it('accepts only true', async () => {
+    const admin = await signIn(app, team.emails.admin, PASSWORD);
+    const answer = await admin.patch(`/api/team/members/${team.memberships.viewer.id}`, { resetPassword: false });
+    expect(answer.status).toBe(400);
+    expect(answer.body.error.fields).toEqual({ resetPassword: 'Only true' });
+  });
+
+  it('answers a new temporary password once, which replaces the old one and signs the member out', async () => {
+    const admin = await signIn(app, team.emails.admin, PASSWORD);
+    const crewTablet = await signIn(app, team.emails.crew, PASSWORD);
+
+    const answer = await admin.patch(`/api/team/members/${team.memberships.crew.id}`, { resetPassword: true });
+    expect(answer.status).toBe(200);
+    expect(answer.body.temporaryPassword).toMatch(/^[a-zA-Z2-9]{4}(-[a-zA-Z2-9]{4}){3}$/);
+
+    expect((await crewTablet.get('/api/session')).status).toBe(401);
+    expect((await request(app).post('/api/session').send({ email: team.emails.crew, password: PASSWORD })).status).toBe(401);
+    await signIn(app, team.emails.crew, answer.body.temporaryPassword);
+
+    // An ordinary edit answers no password at all.
+    const renamed = await admin.patch(`/api/team/members/${team.memberships.crew.id}`, { name: 'Renamed crew' });
+    expect(renamed.body).not.toHaveProperty('temporaryPassword');
+  });
+
+  it('refuses an account that belongs to another team too, and leaves its password alone', async () => {
+    const other = await makeTeam();
+    const otherAdmin = await signIn(app, other.emails.admin, PASSWORD);
+    const added = await otherAdmin.post('/api/team/members', { name: 'Shared', email: team.emails.safety, roles: ['viewer'] });
+    expect(added.status).toBe(201);
+    expect(added.body.temporaryPassword).toBeNull();
+
+    const answer = await otherAdmin.patch(`/api/team/members/${added.body.id}`, { resetPassword: true });
+    expect(answer.status).toBe(409);
+    expect(answer.body.error.code).toBe('shared_account');
+    await signIn(app, team.emails.safety, PASSWORD);
+  });
+});
