@@ -1,0 +1,18 @@
+import type { ComponentType, SVGProps } from 'react';
+import type { Capability } from '@shared/roles';
+import { BoardIcon, CalendarIcon, TeamIcon } from '../components/ui/icons';
+
+export interface NavItem {
+  to: string;
+  label: string;
+  icon: ComponentType<SVGProps<SVGSVGElement>>;
+  /** The read capability of the area; without it the item is not shown at all. */
+  capability: Capability;
+}
+
+// Only the areas that exist today; DESIGN §3 lists the others, which join as they are built.
+export const NAV_ITEMS: NavItem[] = [
+  { to: '/', label: 'Board', icon: BoardIcon, capability: 'board:read' },
+  { to: '/events', label: 'Events', icon: CalendarIcon, capability: 'events:read' },
+  { to: '/team', label: 'Team', icon: TeamIcon, capability: 'team:read' },
+];

@@ -1,0 +1,102 @@
+import type { QueryClient } from '@tanstack/react-query';
+import { createBrowserRouter, redirect, type LoaderFunctionArgs } from 'react-router';
+import { Loading } from '../components/ui/loading';
+import { EditEventPage } from '../features/events/components/edit-event-page';
+import { EventsPage } from '../features/events/components/events-page';
+import { NewEventPage } from '../features/events/components/new-event-page';
+import { sessionQueryOptions } from '../features/session/api/get-session';
+import { SignInPage } from '../features/session/components/sign-in-page';
+import { safeNext, signInPath } from '../lib/safe-next';
+import { AppShell } from './app-shell';
+import { RequireCapability } from './require-capability';
+import { NotFound, RouteError } from './route-error';
+import { BoardRoute } from './routes/board-route';
+import { TeamRoute } from './routes/team-route';
+
+export function createAppRouter(queryClient: QueryClient) {
+  // Arriving at the sign-in page always asks the server: after a sign-out or an expired session
+  // the cached answer is out of date, and a live session should skip the form altogether.
+  async function signInLoader({ request }: LoaderFunctionArgs) {
+    const session = await queryClient.fetchQuery({ ...sessionQueryOptions(), staleTime: 0 });
+    if (session) throw redirect(safeNext(new URL(request.url).searchParams.get('next')));
+    queryClient.removeQueries({ predicate: (query) => query.queryKey[0] !== 'session' });
+    return null;
+  }
+
+  async function requireSession({ request }: LoaderFunctionArgs) {
+    const session = await queryClient.ensureQueryData(sessionQueryOptions());
+    if (!session) {
+      const url = new URL(request.url);
+      throw redirect(signInPath(url.pathname + url.search + url.hash));
+    }
+    return null;
+  }
+
+  const starting = <Loading label="Opening Pitwright" />;
+
+  return createBrowserRouter([
+    {
+      path: '/sign-in',
+      loader: signInLoader,
+      element: <SignInPage />,
+      errorElement: <RouteError />,
+      hydrateFallbackElement: starting,
+    },
+    {
+      path: '/',
+      loader: requireSession,
+      element: <AppShell />,
+      errorElement: <RouteError />,
+      hydrateFallbackElement: starting,
+      children: [
+        {
+          // A page that throws keeps the header and navigation around its error.
+          errorElement: <RouteError />,
+          children: [
+            {
+              index: true,
+              element: (
+                <RequireCapability capability="board:read">
+                  <BoardRoute />
+                </RequireCapability>
+              ),
+            },
+            {
+              path: 'events',
+              element: (
+                <RequireCapability capability="events:read">
+                  <EventsPage />
+                </RequireCapability>
+              ),
+            },
+            {
+              path: 'events/new',
+              element: (
+                <RequireCapability capability="events:manage">
+                  <NewEventPage />
+                </RequireCapability>
+              ),
+            },
+            {
+              path: 'events/:eventId/edit',
+              element: (
+                <RequireCapability capability="events:manage">
+                  <EditEventPage />
+                </RequireCapability>
+              ),
+            },
+            {
+              path: 'team',
+              element: (
+                <RequireCapability capability="team:read">
+                  <TeamRoute />
+                </RequireCapability>
+              ),
+            },
+            { path: '*', element: <NotFound /> },
+          ],
+        },
+      ],
+    },
+  ]);
+}

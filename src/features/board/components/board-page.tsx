@@ -1,0 +1,45 @@
+import type { EventJson } from '@shared/schemas/events';
+import { LinkButton } from '../../../components/ui/button';
+import { CalendarIcon, PlusIcon } from '../../../components/ui/icons';
+import { useCan } from '../../../lib/authorization';
+import { CurrentEventCard } from './current-event-card';
+
+function NoCurrentEvent({ hasEvents }: { hasEvents: boolean }) {
+  const canManage = useCan('events:manage');
+  return (
+    <section
+      aria-labelledby="no-event-title"
+      className="flex flex-col items-center gap-4 rounded-3xl border-2 border-dashed border-line-strong bg-surface px-6 py-12 text-center"
+    >
+      <CalendarIcon className="size-12 text-accent-ink" />
+      <h2 id="no-event-title" className="text-3xl font-bold">
+        No current event
+      </h2>
+      <p className="max-w-prose text-lg text-ink-muted">
+        {canManage
+          ? 'Tell Pitwright which event the team is at, and the board shows it here with the local time at the venue.'
+          : 'Once a mentor picks the event the team is at, the board shows it here.'}
+      </p>
+      {canManage &&
+        (hasEvents ? (
+          <LinkButton to="/events" size="lg" icon={<CalendarIcon />}>
+            Choose the current event
+          </LinkButton>
+        ) : (
+          <LinkButton to="/events/new" size="lg" icon={<PlusIcon />}>
+            Create an event
+          </LinkButton>
+        ))}
+    </section>
+  );
+}
+
+/** The pit board. For now it holds the current event; the next-match card joins it above. */
+export function BoardPage({ currentEvent, hasEvents }: { currentEvent: EventJson | null; hasEvents: boolean }) {
+  return (
+    <div className="flex flex-col gap-6">
+      <h1 className="sr-only">Pit board</h1>
+      {currentEvent ? <CurrentEventCard event={currentEvent} /> : <NoCurrentEvent hasEvents={hasEvents} />}
+    </div>
+  );
+}

@@ -1,0 +1,69 @@
+import { useState, type FormEvent } from 'react';
+import { MIN_PASSWORD_LENGTH, changePasswordSchema } from '@shared/schemas/session';
+import { Button } from '../../../components/ui/button';
+import { Card } from '../../../components/ui/card';
+import { ErrorNotice } from '../../../components/ui/error-notice';
+import { CheckIcon } from '../../../components/ui/icons';
+import { isApiError } from '../../../lib/api-client';
+import { mergeFieldErrors, parseForm, type FieldErrors } from '../../../lib/form-errors';
+import { useChangePassword } from '../api/change-password';
+import { PasswordInput } from './password-input';
+
+export function ChangePasswordForm() {
+  const changePassword = useChangePassword();
+  const [currentPassword, setCurrentPassword] = useState('');
+  const [newPassword, setNewPassword] = useState('');
+  const [clientErrors, setClientErrors] = useState<FieldErrors>({});
+  const errors = mergeFieldErrors(clientErrors, changePassword.error);
+  // A wrong current password may come as a 401 without fields; it belongs next to that field.
+  if (isApiError(changePassword.error, 'invalid_credentials')) errors.currentPassword ??= changePassword.error.message;
+
+  function submit(event: FormEvent) {
+    event.preventDefault();
+    const parsed = parseForm(changePasswordSchema, { currentPassword, newPassword });
+    setClientErrors(parsed.ok ? {} : parsed.errors);
+    if (!parsed.ok) return;
+    changePassword.mutate(parsed.data, {
+      onSuccess: () => {
+        setCurrentPassword('');
+        setNewPassword('');
+      },
+    });
+  }
+
+  return (
+    <Card aria-labelledby="change-password-title">
+      <h2 id="change-password-title" className="mb-4 text-2xl font-bold">
+        Change my password
+      </h2>
+      <form noValidate onSubmit={submit} className="flex max-w-xl flex-col gap-5">
+        {changePassword.isError && <ErrorNotice error={changePassword.error} title="Password not changed" />}
+        {changePassword.isSuccess && (
+          <p role="status" className="flex items-center gap-2 rounded-xl bg-ok-soft p-3 font-semibold text-ok">
+            <CheckIcon /> Password changed.
+          </p>
+        )}
+        <PasswordInput
+          label="Current password"
+          autoComplete="current-password"
+          value={currentPassword}
+          onChange={setCurrentPassword}
+          error={errors.currentPassword}
+        />
+        <PasswordInput
+          label="New password"
+          autoComplete="new-password"
+          value={newPassword}
+          onChange={setNewPassword}
+          error={errors.newPassword}
+          hint={`At least ${MIN_PASSWORD_LENGTH} characters. A short sentence is easy to type and hard to guess.`}
+        />
+        <div>
+          <Button type="submit" pending={changePassword.isPending}>
+            Change password
+          </Button>
+        </div>
+      </form>
+    </Card>
+  );
+}

@@ -1,0 +1,85 @@
+import { useState, type FormEvent } from 'react';
+import { useNavigate, useSearchParams } from 'react-router';
+import { signInSchema } from '@shared/schemas/session';
+import { Button } from '../../../components/ui/button';
+import { ErrorNotice } from '../../../components/ui/error-notice';
+import { TextField } from '../../../components/ui/field';
+import { Wordmark } from '../../../components/ui/wordmark';
+import { isApiError } from '../../../lib/api-client';
+import { mergeFieldErrors, parseForm, type FieldErrors } from '../../../lib/form-errors';
+import { safeNext } from '../../../lib/safe-next';
+import { useSignIn } from '../api/sign-in';
+import { PasswordInput } from './password-input';
+
+function explain(error: unknown): unknown {
+  if (isApiError(error, 'rate_limited') && error.retryAfterSeconds) {
+    const minutes = Math.max(1, Math.ceil(error.retryAfterSeconds / 60));
+    return new Error(`Too many attempts, try again in ${minutes} ${minutes === 1 ? 'minute' : 'minutes'}.`);
+  }
+  return error;
+}
+
+export function SignInPage() {
+  const navigate = useNavigate();
+  const [searchParams] = useSearchParams();
+  const signIn = useSignIn();
+  const [email, setEmail] = useState('');
+  const [password, setPassword] = useState('');
+  const [clientErrors, setClientErrors] = useState<FieldErrors>({});
+  const errors = mergeFieldErrors(clientErrors, signIn.error);
+
+  function submit(event: FormEvent) {
+    event.preventDefault();
+    const parsed = parseForm(signInSchema, { email, password });
+    setClientErrors(parsed.ok ? {} : parsed.errors);
+    if (!parsed.ok) return;
+    signIn.mutate(parsed.data, {
+      onSuccess: () => navigate(safeNext(searchParams.get('next')), { replace: true }),
+    });
+  }
+
+  return (
+    <main className="flex min-h-dvh flex-col items-center justify-center gap-8 px-4 py-10">
+      <div className="text-center">
+        <Wordmark size="lg" />
+        <p className="mt-3 text-lg text-ink-muted">One calm board for a loud pit.</p>
+      </div>
+      <form
+        noValidate
+        onSubmit={submit}
+        aria-labelledby="sign-in-title"
+        className="flex w-full max-w-md flex-col gap-5 rounded-2xl border border-line bg-surface p-6 shadow-sm sm:p-8"
+      >
+        <h1 id="sign-in-title" className="text-2xl font-bold">
+          Sign in to your team
+        </h1>
+        {signIn.isError && <ErrorNotice error={explain(signIn.error)} />}
+        <TextField
+          label="E-mail"
+          type="email"
+          autoComplete="username"
+          inputMode="email"
+          autoCapitalize="none"
+          spellCheck={false}
+          className="min-h-14"
+          value={email}
+          onChange={(event) => setEmail(event.target.value)}
+          error={errors.email}
+        />
+        <PasswordInput
+          label="Password"
+          autoComplete="current-password"
+          value={password}
+          onChange={setPassword}
+          error={errors.password}
+        />
+        <Button type="submit" size="lg" pending={signIn.isPending} className="mt-2 w-full">
+          Sign in
+        </Button>
+      </form>
+      <p className="max-w-md text-center text-sm text-ink-muted">
+        No account yet? A mentor adds you from the team page and gives you a first password.
+      </p>
+    </main>
+  );
+}
