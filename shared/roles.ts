@@ -43,7 +43,8 @@ export type Capability = keyof typeof CAPABILITIES;
 
 /** True when any of the roles grants the capability; unknown capabilities are denied. */
 export function can(roles: readonly Role[], capability: Capability): boolean {
-  const allowed: readonly Role[] | undefined = CAPABILITIES[capability];
+  // Own keys only: 'toString' or '__proto__' must deny, not reach Object.prototype.
+  const allowed: readonly Role[] | undefined = Object.hasOwn(CAPABILITIES, capability) ? CAPABILITIES[capability] : undefined;
   if (!allowed) return false;
   return roles.some((role) => allowed.includes(role));
 }

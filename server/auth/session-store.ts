@@ -36,7 +36,14 @@ export class SessionStore extends SequelizeStore {
   }
 }
 
-/** Ends every session of one user (deactivation, password change elsewhere). */
-export async function endSessionsOf(userId: string, { except }: { except?: string } = {}) {
-  await SessionRecord.destroy({ where: { userId, ...(except ? { sid: { [Op.ne]: except } } : {}) } });
+/** Ends every session of one user (password change elsewhere), or those working in one team (deactivation). */
+export async function endSessionsOf(userId: string, { except, teamId }: { except?: string; teamId?: string } = {}) {
+  const where = { userId, ...(except ? { sid: { [Op.ne]: except } } : {}) };
+  if (!teamId) {
+    await SessionRecord.destroy({ where });
+    return;
+  }
+  const rows = await SessionRecord.findAll({ where, attributes: ['sid', 'data'] });
+  const sids = rows.filter((row) => JSON.parse(row.data).activeTeamId === teamId).map((row) => row.sid);
+  if (sids.length) await SessionRecord.destroy({ where: { sid: sids } });
 }

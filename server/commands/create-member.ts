@@ -2,7 +2,7 @@ import type { CreateMemberInput } from '../../shared/schemas/team';
 import { hashPassword, temporaryPassword } from '../auth/passwords';
 import { inTransaction } from '../db/transaction';
 import { HttpError } from '../errors';
-import { Membership, User } from '../models';
+import { Membership, Team, User } from '../models';
 
 /**
  * Adds a member to a team: a new account with a one-time password, or a membership for an
@@ -11,6 +11,8 @@ import { Membership, User } from '../models';
  */
 export async function createMember(teamId: string, input: CreateMemberInput) {
   return inTransaction(async (transaction) => {
+    // One membership write per team at a time: a resent create waits, then finds the first.
+    await Team.findByPk(teamId, { transaction, lock: transaction.LOCK.UPDATE, rejectOnEmpty: true });
     if (input.id) {
       const existing = await Membership.findByPk(input.id, { include: [{ model: User, as: 'user' }], transaction });
       if (existing?.teamId === teamId) return { membership: existing, temporaryPassword: null, created: false };

@@ -1,6 +1,6 @@
 import type { UpdateEventInput } from '../../shared/schemas/events';
 import { inTransaction } from '../db/transaction';
-import { notFound, stale } from '../errors';
+import { HttpError, notFound, stale } from '../errors';
 import { Event, Team } from '../models';
 import { presentEvent } from '../presenters/event';
 
@@ -12,6 +12,10 @@ export async function updateEvent(teamId: string, eventId: string, { current, ve
     if (!event) throw notFound('Event');
     if (version !== undefined && version !== event.version) throw stale(presentEvent(event, team.currentEventId));
     event.set(fields);
+    // The schema compares the two dates only when both are sent; one may be the stored one.
+    if (event.endDate < event.startDate) {
+      throw new HttpError(400, 'invalid', 'Check these fields: endDate', { fields: { endDate: 'Must not be before the start date' } });
+    }
     if (event.changed()) await event.save({ transaction });
     if (current) await team.update({ currentEventId: event.id }, { transaction });
     return { event, team };

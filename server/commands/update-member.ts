@@ -4,17 +4,19 @@ import { endSessionsOf } from '../auth/session-store';
 import { inTransaction } from '../db/transaction';
 import type { Transaction } from 'sequelize';
 import { HttpError, notFound, stale } from '../errors';
-import { Membership, User } from '../models';
+import { Membership, Team, User } from '../models';
 import { presentMember } from '../presenters/team';
 
 /**
  * Changes a member's name, roles or active state, or gives them a new temporary password.
- * Deactivation and a reset end that member's sessions after the commit; a team never loses
- * its last active admin; an account shared with another team keeps its password (that team's
- * admins have no say here).
+ * Deactivation ends that member's sessions in this team, a reset all of them; a team never
+ * loses its last active admin; an account shared with another team keeps its name and password
+ * (that team's admins have no say here).
  */
 export async function updateMember(teamId: string, membershipId: string, input: UpdateMemberInput) {
   const result = await inTransaction(async (transaction) => {
+    // Serialises member changes per team, so two admins demoting each other cannot both pass the last-admin check.
+    await Team.findByPk(teamId, { transaction, lock: transaction.LOCK.UPDATE, rejectOnEmpty: true });
     const found = await Membership.findOne({
       where: { id: membershipId, teamId },
       include: [{ model: User, as: 'user' }],
@@ -31,20 +33,25 @@ export async function updateMember(teamId: string, membershipId: string, input: 
     }
     if (input.roles) found.roles = input.roles;
     if (input.active !== undefined) found.active = input.active;
+    const touchesAccount = input.resetPassword || (input.name !== undefined && input.name !== found.user!.name);
+    if (touchesAccount && (await Membership.count({ where: { userId: found.userId }, transaction })) > 1) {
+      throw new HttpError(409, 'shared_account', 'This account belongs to other teams too: only its owner changes its name or password');
+    }
     if (input.name) found.user!.name = input.name;
     let password: string | null = null;
     if (input.resetPassword) {
-      if ((await Membership.count({ where: { userId: found.userId }, transaction })) > 1) {
-        throw new HttpError(409, 'shared_account', 'This account belongs to other teams too: its owner changes the password');
-      }
       password = temporaryPassword();
       found.user!.passwordHash = await hashPassword(password);
     }
+    // A change to the user alone (name, password) is still a change to this member: count the version up.
+    if (found.user!.changed()) found.changed('updatedAt', true);
     await found.user!.save({ transaction });
     await found.save({ transaction });
     return { membership: found, temporaryPassword: password };
   });
-  if (input.active === false || input.resetPassword) await endSessionsOf(result.membership.userId);
+  if (input.resetPassword) await endSessionsOf(result.membership.userId);
+  // Only the sessions working in this team end: the account may be active in another team.
+  else if (input.active === false) await endSessionsOf(result.membership.userId, { teamId });
   return result;
 }
 

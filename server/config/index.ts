@@ -14,7 +14,15 @@ const envSchema = z.object({
   DB_PASSWORD: z.string().default('pitwright'),
   SESSION_SECRET: z.string().min(16, 'SESSION_SECRET must be at least 16 characters'),
   SESSION_IDLE_HOURS: z.coerce.number().positive().default(12),
-  TRUST_PROXY: z.string().optional(),
+  // Express accepts a hop count, true/false, or addresses; a bare "1" must be the number.
+  TRUST_PROXY: z
+    .string()
+    .optional()
+    .transform((value) => {
+      if (value === undefined || value === '' || value === 'false') return undefined;
+      if (value === 'true') return true;
+      return /^\d+$/.test(value) ? Number(value) : value;
+    }),
 });
 
 export type Config = ReturnType<typeof loadConfig>;

@@ -7,6 +7,10 @@ import { HttpError } from '../errors';
 export function fieldsOf(error: ZodError): Record<string, string> {
   const fields: Record<string, string> = {};
   for (const issue of error.issues) {
+    if (issue.code === 'unrecognized_keys') {
+      for (const name of issue.keys) fields[[...issue.path, name].join('.')] ??= 'Not a field of this request';
+      continue;
+    }
     const key = issue.path.length ? issue.path.join('.') : '_';
     fields[key] ??= issue.message;
   }

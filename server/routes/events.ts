@@ -20,7 +20,7 @@ export function eventsRouter() {
     const teamId = auth.membership.teamId;
     const [team, events] = await Promise.all([
       Team.findByPk(teamId, { rejectOnEmpty: true }),
-      Event.findAll({ where: { teamId }, order: [['startDate', 'DESC'], ['name', 'ASC']] }),
+      Event.findAll({ where: { teamId }, order: [['startDate', 'DESC'], ['name', 'ASC'], ['createdAt', 'ASC'], ['id', 'ASC']] }),
     ]);
     res.json(events.map((event) => presentEvent(event, team.currentEventId)));
   });

@@ -26,7 +26,11 @@ export function teamRouter() {
     const members = await Membership.findAll({
       where: { teamId: auth.membership.teamId },
       include: [{ model: User, as: 'user' }],
-      order: [[{ model: User, as: 'user' }, 'name', 'ASC']],
+      order: [
+        [{ model: User, as: 'user' }, 'name', 'ASC'],
+        ['createdAt', 'ASC'],
+        ['id', 'ASC'],
+      ],
     });
     res.json(members.map(presentMember));
   });

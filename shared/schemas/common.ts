@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import './messages';
 
 /** A client may choose a record's id so that resending a create cannot make a duplicate. */
 export const clientId = z.uuid({ message: 'Must be a UUID' });

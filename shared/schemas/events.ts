@@ -19,7 +19,11 @@ const eventFields = z.object({
   timeZone: z.string().refine(isTimeZone, { message: 'Use an IANA time zone such as Europe/Berlin' }),
   startDate: isoDate,
   endDate: isoDate,
-  teamNumber: z.number({ message: 'A whole number' }).int({ message: 'A whole number' }).min(1).max(99999),
+  teamNumber: z
+    .number({ message: 'A whole number' })
+    .int({ message: 'A whole number' })
+    .min(1, { message: 'From 1 to 99999' })
+    .max(99999, { message: 'From 1 to 99999' }),
 });
 
 const endNotBeforeStart = (event: { startDate?: string; endDate?: string }) =>

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import './messages';
 import { ROLES, type Role } from '../roles';
 
 export const MIN_PASSWORD_LENGTH = 10;

@@ -41,7 +41,7 @@ describe('PATCH /api/team/members/:id {resetPassword: true}', () => {
     expect(renamed.body).not.toHaveProperty('temporaryPassword');
   });
 
-  it('refuses an account that belongs to another team too, and leaves its password alone', async () => {
+  it('refuses to rename or reset an account that belongs to another team too', async () => {
     const other = await makeTeam();
     const otherAdmin = await signIn(app, other.emails.admin, PASSWORD);
     const added = await otherAdmin.post('/api/team/members', { name: 'Shared', email: team.emails.safety, roles: ['viewer'] });
@@ -52,5 +52,13 @@ describe('PATCH /api/team/members/:id {resetPassword: true}', () => {
     expect(answer.status).toBe(409);
     expect(answer.body.error.code).toBe('shared_account');
     await signIn(app, team.emails.safety, PASSWORD);
+
+    const renamed = await otherAdmin.patch(`/api/team/members/${added.body.id}`, { name: 'Renamed elsewhere' });
+    expect(renamed.status).toBe(409);
+    expect(renamed.body.error.code).toBe('shared_account');
+    // Roles in the other team are that team's business.
+    const promoted = await otherAdmin.patch(`/api/team/members/${added.body.id}`, { roles: ['crew'] });
+    expect(promoted.status).toBe(200);
+    expect(promoted.body.name).toBe('Factory safety');
   });
 });
