@@ -5,31 +5,18 @@
  */
 import os from 'node:os';
 import path from 'node:path';
+import { startPrivateMariaDb } from './lib/mariadb.mjs';
+import { ensureClientBuild } from './lib/client-build.mjs';
+import { sessionSecret } from './lib/session-secret.mjs';
 import { ensureDependencies } from './lib/dependencies.mjs';
 import { fail, SetupError, step } from './lib/log.mjs';
+import { portAnswers, run, serviceGroup, startService, waitFor } from './lib/processes.mjs';
 
 const dev = process.argv.includes('--dev');
-const services = [];
-let stopping = false;
-
-async function stopAll(exitCode) {
-  if (stopping) return;
-  stopping = true;
-  step('Stopping…');
-  // The server first (it holds database connections), the database last.
-  for (const service of services.reverse()) await service.stop();
-  process.exit(exitCode);
-}
-process.on('SIGINT', () => stopAll(0));
-process.on('SIGTERM', () => stopAll(0));
+const services = serviceGroup({ onStopping: () => step('Stopping…') });
 
 async function main() {
   await ensureDependencies();
-  // Loaded after the install step: these import packages that may not have been there before.
-  const { startPrivateMariaDb } = await import('./lib/mariadb.mjs');
-  const { ensureClientBuild } = await import('./lib/client-build.mjs');
-  const { portAnswers, run, startService, waitFor } = await import('./lib/processes.mjs');
-  const { sessionSecret } = await import('./lib/session-secret.mjs');
 
   const dataDir = path.resolve(process.env.DATA_DIR ?? './data');
   const port = Number(process.env.PORT ?? 5180);
@@ -40,26 +27,25 @@ async function main() {
   if (!process.env.DATABASE_URL) {
     const dbPort = Number(process.env.DB_PORT ?? 3307);
     const credentials = { database: env.DB_NAME ?? 'pitwright', user: env.DB_USER ?? 'pitwright', password: env.DB_PASSWORD ?? 'pitwright' };
-    services.push(await startPrivateMariaDb({ dataDir, port: dbPort, ...credentials }));
+    services.add(await startPrivateMariaDb({ dataDir, port: dbPort, ...credentials }));
     env.DB_PORT = String(dbPort);
   } else {
     step('Using the database at DATABASE_URL (no private MariaDB started).');
   }
-  if (stopping) return;
+  if (services.stopping) return;
 
   step('Preparing the database (migrations, demo seed on first run)…');
   await run(process.execPath, ['--import', 'tsx', 'server/db/prepare.ts'], { env });
   if (!dev) await ensureClientBuild();
 
   const serverArgs = dev ? ['--watch-path=server', '--watch-path=shared', '--import', 'tsx', 'server/index.ts'] : ['--import', 'tsx', 'server/index.ts'];
-  const server = startService(process.execPath, serverArgs, { env, ipc: true });
-  services.push(server);
-  server.exited.then(({ code }) => !stopping && (console.error(`The server stopped (exit ${code}).`), stopAll(1)));
+  const server = services.add(startService(process.execPath, serverArgs, { env, ipc: true }));
+  server.exited.then(({ code }) => !services.stopping && (console.error(`The server stopped (exit ${code}).`), services.stopAll(1)));
   await waitFor(() => fetch(`http://127.0.0.1:${port}/api/health`).then((r) => r.ok, () => false), { timeoutMs: 60_000, what: 'the server' });
 
   let url = `http://localhost:${port}`;
   if (dev) {
-    services.push(startService(process.execPath, ['node_modules/vite/bin/vite.js', '--host', '--strictPort'], { env }));
+    services.add(startService(process.execPath, ['node_modules/vite/bin/vite.js', '--host', '--strictPort'], { env }));
     url = 'http://localhost:5173 (Vite, with hot reload)';
   }
   printWelcome(url, port);
@@ -81,5 +67,5 @@ function printWelcome(url, port) {
 
 main().catch(async (error) => {
   fail(error);
-  await stopAll(1);
+  await services.stopAll(1);
 });

@@ -74,3 +74,31 @@ export async function waitFor(check, { timeoutMs, intervalMs = 200, what }) {
     await new Promise((resolve) => setTimeout(resolve, intervalMs));
   }
 }
+
+/**
+ * The services one script started, stopped in reverse order (the server before the database)
+ * on Ctrl-C, on TERM, or when the script is done. `stopAll` exits the process.
+ */
+export function serviceGroup({ onStopping = () => {} } = {}) {
+  const services = [];
+  let stopping = false;
+  async function stopAll(exitCode) {
+    if (stopping) return;
+    stopping = true;
+    onStopping();
+    for (const service of services.reverse()) await service.stop();
+    process.exit(exitCode);
+  }
+  process.on('SIGINT', () => stopAll(130));
+  process.on('SIGTERM', () => stopAll(143));
+  return {
+    add(service) {
+      services.push(service);
+      return service;
+    },
+    stopAll,
+    get stopping() {
+      return stopping;
+    },
+  };
+}

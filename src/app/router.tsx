@@ -1,4 +1,6 @@
+import type { ReactNode } from 'react';
 import type { QueryClient } from '@tanstack/react-query';
+import type { Capability } from '@shared/roles';
 import { createBrowserRouter, redirect, type LoaderFunctionArgs } from 'react-router';
 import { Loading } from '../components/ui/loading';
 import { EditEventPage } from '../features/events/components/edit-event-page';
@@ -12,6 +14,9 @@ import { RequireCapability } from './require-capability';
 import { NotFound, RouteError } from './route-error';
 import { BoardRoute } from './routes/board-route';
 import { TeamRoute } from './routes/team-route';
+
+/** A page only members whose roles grant the capability may open. */
+const guarded = (capability: Capability, page: ReactNode) => <RequireCapability capability={capability}>{page}</RequireCapability>;
 
 export function createAppRouter(queryClient: QueryClient) {
   // Arriving at the sign-in page always asks the server: after a sign-out or an expired session
@@ -55,43 +60,23 @@ export function createAppRouter(queryClient: QueryClient) {
           children: [
             {
               index: true,
-              element: (
-                <RequireCapability capability="board:read">
-                  <BoardRoute />
-                </RequireCapability>
-              ),
+              element: guarded('board:read', <BoardRoute />),
             },
             {
               path: 'events',
-              element: (
-                <RequireCapability capability="events:read">
-                  <EventsPage />
-                </RequireCapability>
-              ),
+              element: guarded('events:read', <EventsPage />),
             },
             {
               path: 'events/new',
-              element: (
-                <RequireCapability capability="events:manage">
-                  <NewEventPage />
-                </RequireCapability>
-              ),
+              element: guarded('events:manage', <NewEventPage />),
             },
             {
               path: 'events/:eventId/edit',
-              element: (
-                <RequireCapability capability="events:manage">
-                  <EditEventPage />
-                </RequireCapability>
-              ),
+              element: guarded('events:manage', <EditEventPage />),
             },
             {
               path: 'team',
-              element: (
-                <RequireCapability capability="team:read">
-                  <TeamRoute />
-                </RequireCapability>
-              ),
+              element: guarded('team:read', <TeamRoute />),
             },
             { path: '*', element: <NotFound /> },
           ],
