@@ -17,6 +17,8 @@ export default defineConfig({
         test: {
           name: 'browser',
           include: ['tests/e2e/**/*.test.ts'],
+          // The server runs in the test process: an error it logs fails the test.
+          setupFiles: ['tests/setup/fail-on-console-error.ts'],
           testTimeout: 60_000,
           hookTimeout: 60_000,
         },

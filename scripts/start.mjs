@@ -27,7 +27,7 @@ async function main() {
   if (!process.env.DATABASE_URL) {
     const dbPort = Number(process.env.DB_PORT ?? 3307);
     const credentials = { database: env.DB_NAME ?? 'pitwright', user: env.DB_USER ?? 'pitwright', password: env.DB_PASSWORD ?? 'pitwright' };
-    services.add(await startPrivateMariaDb({ dataDir, port: dbPort, ...credentials }));
+    await startPrivateMariaDb({ dataDir, port: dbPort, ...credentials, track: services.add });
     env.DB_PORT = String(dbPort);
   } else {
     step('Using the database at DATABASE_URL (no private MariaDB started).');

@@ -3,7 +3,7 @@ import path from 'node:path';
 import { run } from './processes.mjs';
 import { step } from './log.mjs';
 
-const INPUTS = ['src', 'shared', 'index.html', 'vite.config.ts', 'package-lock.json', 'tsconfig.json'];
+const INPUTS = ['src', 'shared', 'public', 'index.html', 'vite.config.ts', 'package-lock.json', 'tsconfig.json'];
 const OUTPUT = 'dist/index.html';
 
 function newestChange(entry) {

@@ -12,7 +12,7 @@ const fingerprint = () =>
     .update(fs.existsSync('package-lock.json') ? fs.readFileSync('package-lock.json') : '')
     .digest('hex');
 
-/** Installs npm dependencies when node_modules is missing or older than the lock file. */
+/** Installs npm dependencies when node_modules is missing or was installed from another package.json or lock file. */
 export async function ensureDependencies() {
   const wanted = fingerprint();
   if (fs.existsSync(STAMP) && fs.readFileSync(STAMP, 'utf8') === wanted) return;

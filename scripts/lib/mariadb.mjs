@@ -38,11 +38,14 @@ async function clearLeftovers(dir, pidFile) {
 
 /**
  * Starts a private MariaDB server with its data under `dataDir`, listening only on
- * 127.0.0.1:`port`; makes the database and its user; returns a handle whose `stop()` shuts it
- * down cleanly.
+ * 127.0.0.1:`port`; makes the database and its user. `track` receives the server's handle as
+ * soon as it is spawned, so that a Ctrl-C while it starts stops it too; `stop()` on the handle
+ * shuts it down cleanly.
  */
-export async function startPrivateMariaDb({ dataDir, port, database, user, password, fresh = false }) {
-  await ensureDebianPackage({ binary: 'mariadbd', pkg: 'mariadb-server', why: 'the private database' });
+export async function startPrivateMariaDb({ dataDir, port, database, user, password, fresh = false, track }) {
+  const why = 'the private database';
+  const mariadbd = await ensureDebianPackage({ binary: 'mariadbd', pkg: 'mariadb-server', why });
+  const installDb = await ensureDebianPackage({ binary: 'mariadb-install-db', pkg: 'mariadb-server', why });
   const dir = path.resolve(dataDir, 'mariadb');
   const pidFile = path.join(dir, 'mysqld.pid');
   const socketPath = socketPathFor(dir);
@@ -54,16 +57,17 @@ export async function startPrivateMariaDb({ dataDir, port, database, user, passw
   const asRoot = process.getuid?.() === 0 ? ['--user=root'] : [];
   if (!fs.existsSync(path.join(dir, 'mysql'))) {
     step(`Creating a private MariaDB data directory in ${path.relative(process.cwd(), dir) || dir}…`);
-    await run('mariadb-install-db', ['--no-defaults', `--datadir=${dir}`, ...asRoot, '--auth-root-authentication-method=normal', '--skip-test-db'], { quiet: true });
+    await run(installDb, ['--no-defaults', `--datadir=${dir}`, ...asRoot, '--auth-root-authentication-method=normal', '--skip-test-db'], { quiet: true });
   }
   step(`Starting MariaDB on 127.0.0.1:${port}…`);
   const errorLog = path.join(dir, 'mariadb.err');
   const service = startService(
-    'mariadbd',
+    mariadbd,
     ['--no-defaults', `--datadir=${dir}`, `--socket=${socketPath}`, `--port=${port}`, '--bind-address=127.0.0.1', ...asRoot, `--pid-file=${pidFile}`, `--log-error=${errorLog}`, '--character-set-server=utf8mb4', '--collation-server=utf8mb4_unicode_ci', '--skip-name-resolve', '--innodb-buffer-pool-size=128M'],
     // No inherited output: a background server must not hold the terminal's (or CI's) pipes open.
-    { stdio: 'ignore' },
+    { stdio: 'ignore', timeoutMs: 60_000 },
   );
+  track(service);
   let exited = false;
   service.exited.then(() => (exited = true));
   try {
@@ -71,30 +75,48 @@ export async function startPrivateMariaDb({ dataDir, port, database, user, passw
       if (exited) throw new SetupError(`MariaDB stopped while starting. Its log (${errorLog}) ends with:\n${tail(errorLog)}`);
       return portAnswers(port);
     }, { timeoutMs: 60_000, what: 'MariaDB to accept connections' });
-    await provision({ socketPath, database, user, password, fresh });
+    await provision({ socketPath, rootPasswordFile: path.resolve(dataDir, 'mariadb-root-password'), database, user, password, fresh });
   } catch (error) {
     await service.stop();
     throw error;
   }
-  return {
-    async stop() {
-      await service.stop(60_000);
-    },
-  };
 }
 
 function tail(file) {
   return fs.existsSync(file) ? fs.readFileSync(file, 'utf8').split('\n').slice(-15).join('\n') : '(no log)';
 }
 
-async function provision({ socketPath, database, user, password, fresh }) {
+/**
+ * A fresh data directory lets root in without a password, over TCP too. The first start gives
+ * root a random password, kept readable only by us, and removes root's TCP accounts.
+ */
+async function secureRoot(connection, rootPasswordFile) {
+  const rootPassword = crypto.randomBytes(24).toString('base64url');
+  fs.writeFileSync(rootPasswordFile, rootPassword, { mode: 0o600 });
+  for (const host of ['127.0.0.1', '::1', os.hostname()]) {
+    await connection.query(`DROP USER IF EXISTS 'root'@${connection.escape(host)}, ''@${connection.escape(host)}`);
+  }
+  await connection.query(`DROP USER IF EXISTS ''@'localhost'`);
+  await connection.query(`ALTER USER 'root'@'localhost' IDENTIFIED BY ${connection.escape(rootPassword)}`);
+}
+
+async function provision({ socketPath, rootPasswordFile, database, user, password, fresh }) {
   const mariadb = await import('mariadb');
-  const connection = await mariadb.createConnection({ socketPath, user: 'root' });
+  const secured = fs.existsSync(rootPasswordFile);
+  const connection = await mariadb
+    .createConnection({ socketPath, user: 'root', password: secured ? fs.readFileSync(rootPasswordFile, 'utf8').trim() : '' })
+    .catch((error) => {
+      throw new SetupError(
+        `Could not sign in to the private MariaDB as root (${error.message}). The password lives in ${rootPasswordFile}; ` +
+          `if that file was lost, remove ${path.dirname(socketPath)} to start from an empty database.`,
+      );
+    });
   try {
+    if (!secured) await secureRoot(connection, rootPasswordFile);
     const db = connection.escapeId(database);
     if (fresh) await connection.query(`DROP DATABASE IF EXISTS ${db}`);
     await connection.query(`CREATE DATABASE IF NOT EXISTS ${db} CHARACTER SET utf8mb4 COLLATE utf8mb4_unicode_ci`);
-    // Over TCP from 127.0.0.1 the server may match either host: create both.
+    // Names are not resolved: '127.0.0.1' is TCP on loopback, 'localhost' the Unix socket.
     for (const host of ['localhost', '127.0.0.1']) {
       const account = `${connection.escape(user)}@${connection.escape(host)}`;
       await connection.query(`CREATE USER IF NOT EXISTS ${account} IDENTIFIED BY ${connection.escape(password)}`);

@@ -20,16 +20,19 @@ export function run(command, args, { env = process.env, quiet = false } = {}) {
  * Starts a long-running child in its own process group, so that Ctrl-C in the terminal reaches
  * only us and we stop the children in order, and so that stopping it also stops its children.
  */
-export function startService(command, args, { env = process.env, stdio = 'inherit', ipc = false } = {}) {
+export function startService(command, args, { env = process.env, stdio = 'inherit', ipc = false, timeoutMs = 10_000 } = {}) {
   const streams = typeof stdio === 'string' ? [stdio, stdio, stdio] : stdio;
   // An IPC channel closes when we die, even by SIGKILL: a child that listens for it never outlives us.
   const child = spawn(command, args, { env, stdio: ipc ? [...streams, 'ipc'] : streams, detached: true });
-  const exited = new Promise((resolve) => child.on('exit', (code, signal) => resolve({ code, signal })));
+  const exited = new Promise((resolve) => {
+    child.on('exit', (code, signal) => resolve({ code, signal }));
+    child.on('error', (error) => resolve({ code: null, signal: null, error }));
+  });
   return {
     child,
     exited,
-    async stop(timeoutMs = 10_000) {
-      if (child.exitCode !== null || child.signalCode !== null) return;
+    async stop() {
+      if (child.pid === undefined || child.exitCode !== null || child.signalCode !== null) return;
       signalGroup(child.pid, 'SIGTERM');
       const timer = setTimeout(() => signalGroup(child.pid, 'SIGKILL'), timeoutMs);
       await exited;

@@ -6,11 +6,13 @@ let aptUpdated = false;
 
 /**
  * Makes sure a Debian package that provides `binary` is installed: installs it with apt-get when
- * we are root, otherwise says exactly what to run.
+ * we are root, otherwise says exactly what to run. Answers the binary's full path, since a
+ * user's PATH often lacks /usr/sbin.
  */
 export async function ensureDebianPackage({ binary, pkg, why }) {
   const candidates = binary.startsWith('/') ? [binary] : ['/usr/sbin', '/usr/bin', '/sbin', '/bin'].map((dir) => `${dir}/${binary}`);
-  if (candidates.some((file) => fs.existsSync(file))) return;
+  const found = () => candidates.find((file) => fs.existsSync(file));
+  if (found()) return found();
   if (process.getuid?.() !== 0) {
     throw new SetupError(`${why} needs ${binary}. Install it once with:\n    sudo apt-get update && sudo apt-get install -y ${pkg}`);
   }
@@ -21,4 +23,6 @@ export async function ensureDebianPackage({ binary, pkg, why }) {
     aptUpdated = true;
   }
   await run('apt-get', ['install', '-y', '-qq', '--no-install-recommends', pkg], { env, quiet: true });
+  if (!found()) throw new SetupError(`Installed ${pkg}, yet ${binary} is still missing`);
+  return found();
 }

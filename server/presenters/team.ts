@@ -8,12 +8,12 @@ export const presentTeam = (team: Team): TeamJson => ({
   currentEventId: team.currentEventId ?? null,
 });
 
-/** A membership with its user loaded. */
-export const presentMember = (membership: Membership): MemberJson => ({
+/** A membership with its user loaded; the e-mail only for those who manage members. */
+export const presentMember = (membership: Membership, { withEmail = true } = {}): MemberJson => ({
   id: membership.id,
   userId: membership.userId,
   name: membership.user!.name,
-  email: membership.user!.email,
+  ...(withEmail ? { email: membership.user!.email } : {}),
   roles: membership.roles,
   active: membership.active,
   version: membership.version,

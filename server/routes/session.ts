@@ -5,7 +5,7 @@ import { changePasswordSchema, signInSchema, switchTeamSchema } from '../../shar
 import { hashPassword, verifyPassword } from '../auth/passwords';
 import { activeMembershipsOf, authOf, requireAuth } from '../auth/require-auth';
 import { endSessionsOf } from '../auth/session-store';
-import { signInLimiters } from '../auth/sign-in-limits';
+import { passwordChangeLimiter, signInLimiters } from '../auth/failure-limits';
 import { HttpError, notFound } from '../errors';
 import type { User } from '../models';
 import { presentSession } from '../presenters/session';
@@ -65,7 +65,7 @@ export function sessionRouter({ passport, csrf, cookieName }: { passport: Passpo
     });
   });
 
-  router.put('/password', requireAuth, async (req, res) => {
+  router.put('/password', requireAuth, passwordChangeLimiter(), async (req, res) => {
     const { currentPassword, newPassword } = changePasswordSchema.parse(req.body);
     const { user } = authOf(req);
     if (!(await verifyPassword(currentPassword, user.passwordHash))) {

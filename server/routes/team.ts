@@ -1,6 +1,7 @@
 import { Router } from 'express';
 import { z } from 'zod';
 import { createMemberSchema, updateMemberSchema } from '../../shared/schemas/team';
+import { can } from '../../shared/roles';
 import { authOf } from '../auth/require-auth';
 import { createMember } from '../commands/create-member';
 import { updateMember } from '../commands/update-member';
@@ -32,7 +33,8 @@ export function teamRouter() {
         ['id', 'ASC'],
       ],
     });
-    res.json(members.map(presentMember));
+    const withEmail = can(auth.membership.roles, 'members:manage');
+    res.json(members.map((member) => presentMember(member, { withEmail })));
   });
 
   router.post('/members', async (req, res) => {

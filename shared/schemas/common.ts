@@ -10,4 +10,7 @@ export interface ApiError {
 }
 
 /** Optimistic-locking token carried by records that several tablets edit at once. */
-export const versionField = z.number().int().nonnegative();
+export const versionField = z
+  .number({ message: 'The version number you loaded' })
+  .int({ message: 'The version number you loaded' })
+  .nonnegative({ message: 'The version number you loaded' });

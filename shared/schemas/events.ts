@@ -16,7 +16,11 @@ export function isTimeZone(name: string): boolean {
 const eventFields = z.object({
   name: z.string().trim().min(1, { message: 'Give the event a name' }).max(120),
   venue: z.string().trim().min(1, { message: 'Give the venue' }).max(160),
-  timeZone: z.string().refine(isTimeZone, { message: 'Use an IANA time zone such as Europe/Berlin' }),
+  timeZone: z
+    .string()
+    .refine(isTimeZone, { message: 'Use an IANA time zone such as Europe/Berlin' })
+    // Stored as the runtime spells it, so `america/chicago` and `America/Chicago` are one zone.
+    .transform((name) => new Intl.DateTimeFormat('en-US', { timeZone: name }).resolvedOptions().timeZone),
   startDate: isoDate,
   endDate: isoDate,
   teamNumber: z

@@ -11,10 +11,15 @@ export const emailField = z
   .toLowerCase()
   .pipe(z.email({ message: 'Enter a valid e-mail address' }).max(254));
 
+// bcrypt reads only the first 72 bytes: a longer password would be a shorter one in disguise.
+export const MAX_NEW_PASSWORD_BYTES = 72;
+
 export const passwordField = z
   .string()
   .min(MIN_PASSWORD_LENGTH, { message: `At least ${MIN_PASSWORD_LENGTH} characters` })
-  .max(MAX_PASSWORD_LENGTH, { message: `At most ${MAX_PASSWORD_LENGTH} characters` });
+  .refine((password) => new TextEncoder().encode(password).length <= MAX_NEW_PASSWORD_BYTES, {
+    message: `At most ${MAX_NEW_PASSWORD_BYTES} bytes (about ${MAX_NEW_PASSWORD_BYTES} letters)`,
+  });
 
 export const signInSchema = z.object({
   email: emailField,

@@ -17,7 +17,7 @@ export const updateMemberSchema = z
   .object({
     name: memberName.optional(),
     roles: rolesField.optional(),
-    active: z.boolean().optional(),
+    active: z.boolean({ message: 'true or false' }).optional(),
     /** Replaces the member's password with a new temporary one, answered once. */
     resetPassword: z.literal(true, { message: 'Only true' }).optional(),
     version: versionField.optional(),
@@ -37,7 +37,8 @@ export interface MemberJson {
   id: string;
   userId: string;
   name: string;
-  email: string;
+  /** Only for those who manage members: viewers include guests, members include minors. */
+  email?: string;
   roles: Role[];
   active: boolean;
   version: number;

@@ -8,7 +8,6 @@ import { signInPath } from '../lib/safe-next';
 import { useOnline } from '../lib/use-online';
 import { AppHeader } from './app-header';
 import { AppNav } from './app-nav';
-import { NoTeam } from './no-team';
 
 function OfflineBanner() {
   const online = useOnline();
@@ -39,7 +38,9 @@ export function AppShell() {
     if (navigation.location?.pathname === '/sign-in') return null;
     return <Navigate to={signInPath(location.pathname + location.search + location.hash)} replace />;
   }
-  if (!viewer) return <NoTeam session={session} />;
+  // The server marks one membership active in every session answer (it refuses to sign in an
+  // account with none), so this is a broken answer: the route's error page says so.
+  if (!viewer) throw new Error('The server did not say which team you are working in. Reload the page.');
 
   return (
     <ViewerProvider value={viewer}>

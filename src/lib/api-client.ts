@@ -42,7 +42,7 @@ export interface SessionHooks {
   csrfToken: () => string | undefined;
   /** Asks the server for a fresh session; resolves to its CSRF token, or undefined when signed out. */
   refreshCsrfToken: () => Promise<string | undefined>;
-  /** A call other than /api/session answered 401: the session is over. */
+  /** A call other than reading the session or signing in answered 401: the session is over. */
   sessionEnded: () => void;
 }
 
@@ -125,7 +125,11 @@ async function send<T>(method: Method, path: string, options: RequestOptions, is
     const fresh = await hooks.refreshCsrfToken();
     if (fresh) return send<T>(method, path, options, true);
   }
-  if (error.status === 401 && !path.startsWith('/api/session')) hooks.sessionEnded();
+  // A 401 means the session is over, except from asking for the session (answered as "signed
+  // out") and from signing in (a wrong password). A wrong current password on a password change
+  // is a 400, so a 401 there, or on a team switch, also ends the session.
+  const asksForSession = path === '/api/session' && (method === 'GET' || method === 'POST');
+  if (error.status === 401 && !asksForSession) hooks.sessionEnded();
   throw error;
 }
 

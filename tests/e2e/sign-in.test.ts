@@ -40,7 +40,7 @@ it('a lead signs in, sees the shell with the current event, and signs out', asyn
     await page.getByRole('button', { name: 'Sign out' }).click();
     await page.getByLabel('E-mail').waitFor();
     expect(page.url()).toContain('/sign-in');
-    // The session is really gone, not just hidden.
+    // Signed out for the server too, not only on screen (the API tests check the session row is destroyed).
     const status = await page.evaluate(() => fetch('/api/session').then((answer) => answer.status));
     expect(status).toBe(401);
   });

@@ -20,7 +20,14 @@ async function signInAs(page: Page, email: string, password: string) {
 
 it('a mentor adds a member on a tablet; the member signs in with the temporary password and picks their own', async () => {
   const context = await harness.browser.newContext({ viewport: { width: 800, height: 1280 }, hasTouch: true });
-  const page = await context.newPage();
+  try {
+    await onboard(await context.newPage());
+  } finally {
+    await context.close();
+  }
+});
+
+async function onboard(page: Page) {
   const newcomer = uniqueEmail('newcomer');
 
   await signInAs(page, team.emails.admin, PASSWORD);
@@ -47,5 +54,4 @@ it('a mentor adds a member on a tablet; the member signs in with the temporary p
   await page.getByRole('button', { name: 'Sign out' }).click();
 
   await signInAs(page, newcomer, 'my own pit password');
-  await context.close();
-});
+}

@@ -47,11 +47,14 @@ export async function makeTeamWithoutEvent({ number = randomTeamNumber() } = {})
 
 /** A valid body for POST /api/events; override any field. */
 export const eventBody = (overrides: Record<string, unknown> = {}) => ({
-  name: 'Lone Star Regional',
-  venue: 'George R. Brown Convention Center',
+  name: 'Fenwick Valley Qualifier',
+  venue: 'Ostermoor Exhibition Hall',
   timeZone: 'America/Chicago',
   startDate: '2027-03-04',
   endDate: '2027-03-06',
-  teamNumber: 4321,
+  teamNumber: 24321,
   ...overrides,
 });
+
+/** A second team for an existing account, as an operator would link it (the API refuses to). */
+export const joinTeam = (userId: string, teamId: string, roles: Role[]) => Membership.create({ teamId, userId, roles });

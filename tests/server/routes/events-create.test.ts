@@ -54,7 +54,7 @@ describe('POST /api/events: bad input', () => {
   });
 
   it('answers 400 malformed_json for a body that is not JSON', async () => {
-    const answer = await admin.agent.post('/api/events').set('x-csrf-token', admin.csrfToken).set('Content-Type', 'application/json').send('{"name": "Regional",');
+    const answer = await admin.agent.post('/api/events').set('x-csrf-token', admin.csrfToken).set('Content-Type', 'application/json').send('{"name": "Qualifier",');
     expect(answer.status).toBe(400);
     expect(answer.body).toEqual({ error: { code: 'malformed_json', message: 'The request body is not valid JSON' } });
   });
@@ -70,16 +70,16 @@ describe('POST /api/events: bad input', () => {
 
 describe('POST /api/events: success', () => {
   it('answers 201 with every field, keeping the time zone exactly', async () => {
-    const answer = await admin.post('/api/events', eventBody({ name: '  Lone Star Regional  ' }));
+    const answer = await admin.post('/api/events', eventBody({ name: '  Fenwick Valley Qualifier  ' }));
     expect(answer.status).toBe(201);
     expect(answer.body).toEqual({
       id: expect.stringMatching(/^[0-9a-f]{8}-[0-9a-f]{4}-4[0-9a-f]{3}-[89ab][0-9a-f]{3}-[0-9a-f]{12}$/),
-      name: 'Lone Star Regional',
-      venue: 'George R. Brown Convention Center',
+      name: 'Fenwick Valley Qualifier',
+      venue: 'Ostermoor Exhibition Hall',
       timeZone: 'America/Chicago',
       startDate: '2027-03-04',
       endDate: '2027-03-06',
-      teamNumber: 4321,
+      teamNumber: 24321,
       current: false, // the team already has a current event
       version: 0,
       createdAt: expect.stringMatching(/^\d{4}-\d\d-\d\dT\d\d:\d\d:\d\d\.\d{3}Z$/),
@@ -110,6 +110,14 @@ describe('POST /api/events: success', () => {
     const list = (await client.get('/api/events')).body as { id: string; current: boolean }[];
     expect(list.filter((event) => event.current).map((event) => event.id)).toEqual([created.body.id]);
     expect(list.find((event) => event.id === own.event.id)?.current).toBe(false);
+  });
+});
+
+describe('POST /api/events: time zone spelling', () => {
+  it('stores the zone as the runtime spells it, whatever the case it was typed in', async () => {
+    const answer = await admin.post('/api/events', eventBody({ timeZone: 'america/chicago' }));
+    expect(answer.status).toBe(201);
+    expect(answer.body.timeZone).toBe('America/Chicago');
   });
 });
 

@@ -1,7 +1,7 @@
 import { beforeAll, describe, expect, it } from 'vitest';
 import request from 'supertest';
 import { signIn, testApp } from '../../support/app';
-import { makeTeam, PASSWORD } from '../../support/factories';
+import { joinTeam, makeTeam, PASSWORD } from '../../support/factories';
 
 const { app } = testApp();
 let team: Awaited<ReturnType<typeof makeTeam>>;
@@ -44,20 +44,18 @@ describe('PATCH /api/team/members/:id {resetPassword: true}', () => {
   it('refuses to rename or reset an account that belongs to another team too', async () => {
     const other = await makeTeam();
     const otherAdmin = await signIn(app, other.emails.admin, PASSWORD);
-    const added = await otherAdmin.post('/api/team/members', { name: 'Shared', email: team.emails.safety, roles: ['viewer'] });
-    expect(added.status).toBe(201);
-    expect(added.body.temporaryPassword).toBeNull();
+    const added = await joinTeam(team.memberships.safety.userId, other.team.id, ['viewer']);
 
-    const answer = await otherAdmin.patch(`/api/team/members/${added.body.id}`, { resetPassword: true });
+    const answer = await otherAdmin.patch(`/api/team/members/${added.id}`, { resetPassword: true });
     expect(answer.status).toBe(409);
     expect(answer.body.error.code).toBe('shared_account');
     await signIn(app, team.emails.safety, PASSWORD);
 
-    const renamed = await otherAdmin.patch(`/api/team/members/${added.body.id}`, { name: 'Renamed elsewhere' });
+    const renamed = await otherAdmin.patch(`/api/team/members/${added.id}`, { name: 'Renamed elsewhere' });
     expect(renamed.status).toBe(409);
     expect(renamed.body.error.code).toBe('shared_account');
     // Roles in the other team are that team's business.
-    const promoted = await otherAdmin.patch(`/api/team/members/${added.body.id}`, { roles: ['crew'] });
+    const promoted = await otherAdmin.patch(`/api/team/members/${added.id}`, { roles: ['crew'] });
     expect(promoted.status).toBe(200);
     expect(promoted.body.name).toBe('Factory safety');
   });

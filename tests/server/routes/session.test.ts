@@ -128,3 +128,12 @@ describe('PUT /api/session/password', () => {
     await signIn(app, other.emails.crew, 'a-new-password-1');
   });
 });
+
+describe('new password length', () => {
+  it('refuses a new password longer than the 72 bytes bcrypt reads', async () => {
+    const client = await signIn(app, team.emails.battery, PASSWORD);
+    const answer = await client.put('/api/session/password', { currentPassword: PASSWORD, newPassword: 'é'.repeat(37) });
+    expect(answer.status).toBe(400);
+    expect(answer.body.error.fields).toEqual({ newPassword: 'At most 72 bytes (about 72 letters)' });
+  });
+});

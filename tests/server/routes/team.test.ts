@@ -4,7 +4,7 @@ import request from 'supertest';
 import { ROLES, type Role } from '../../../shared/roles';
 import { signIn, signInEveryRole, testApp, type SignedIn } from '../../support/app';
 import { FORBIDDEN, invalid, UNAUTHENTICATED } from '../../support/errors';
-import { makeTeam, PASSWORD, uniqueEmail, type FactoryTeam } from '../../support/factories';
+import { joinTeam, makeTeam, PASSWORD, uniqueEmail, type FactoryTeam } from '../../support/factories';
 
 // GET /api/team, GET and POST /api/team/members. Editing members is in team-members-update.test.ts.
 const { app } = testApp();
@@ -55,7 +55,8 @@ describe('GET /api/team/members', () => {
           id: team.memberships[each].id,
           userId: team.memberships[each].userId,
           name: `Factory ${each}`,
-          email: team.emails[each],
+          // E-mail addresses only for those who manage members.
+          ...(role === 'admin' ? { email: team.emails[each] } : {}),
           roles: [each],
           active: true,
           version: 0,
@@ -126,14 +127,25 @@ describe('POST /api/team/members: success', () => {
     expect((await member.get('/api/team')).body.id).toBe(team.team.id);
   });
 
-  it('adds an account of another team without a password; that member can switch teams', async () => {
+  it('refuses an e-mail that has an account with another team, and leaks nothing of it', async () => {
     const other = await makeTeam();
-    const answer = await clients.admin.post('/api/team/members', newMember({ email: other.emails.safety, roles: ['viewer'] }));
-    expect(answer.status).toBe(201);
-    expect(answer.body.temporaryPassword).toBeNull();
-    expect(answer.body.userId).toBe(other.memberships.safety.userId);
+    const before = await memberIds(clients.admin);
+    const answer = await clients.admin.post('/api/team/members', newMember({ email: other.emails.safety, roles: ['admin'] }));
+    expect(answer.status).toBe(409);
+    expect(answer.body).toEqual({
+      error: {
+        code: 'account_exists',
+        message: 'This e-mail already has a Pitwright account with another team',
+        fields: { email: 'Already has an account with another team: ask them to use another e-mail' },
+      },
+    });
+    expect(await memberIds(clients.admin)).toEqual(before);
+    await signIn(app, other.emails.safety, PASSWORD);
+  });
 
-    // The account keeps its own password and now has two teams.
+  it('lets an account with two teams switch between them, with each team\'s roles', async () => {
+    const other = await makeTeam();
+    await joinTeam(other.memberships.safety.userId, team.team.id, ['viewer']);
     const member = await signIn(app, other.emails.safety, PASSWORD);
     const session = await member.get('/api/session');
     expect(session.body.memberships.map((m: { teamId: string; roles: Role[] }) => [m.teamId, m.roles])).toEqual([

@@ -4,7 +4,6 @@ import { Button } from '../../../components/ui/button';
 import { Card } from '../../../components/ui/card';
 import { ErrorNotice } from '../../../components/ui/error-notice';
 import { CheckIcon } from '../../../components/ui/icons';
-import { isApiError } from '../../../lib/api-client';
 import { mergeFieldErrors, parseForm, type FieldErrors } from '../../../lib/form-errors';
 import { useChangePassword } from '../api/change-password';
 import { PasswordInput } from './password-input';
@@ -14,9 +13,9 @@ export function ChangePasswordForm() {
   const [currentPassword, setCurrentPassword] = useState('');
   const [newPassword, setNewPassword] = useState('');
   const [clientErrors, setClientErrors] = useState<FieldErrors>({});
+  // A wrong current password comes back as a 400 with fields.currentPassword, so it lands next to
+  // that field; a 429 rate_limited (too many wrong ones) has no fields and shows in the notice.
   const errors = mergeFieldErrors(clientErrors, changePassword.error);
-  // A wrong current password may come as a 401 without fields; it belongs next to that field.
-  if (isApiError(changePassword.error, 'invalid_credentials')) errors.currentPassword ??= changePassword.error.message;
 
   function submit(event: FormEvent) {
     event.preventDefault();

@@ -59,7 +59,8 @@ export function MemberCard({ member, isSelf, canManage }: MemberCardProps) {
             {member.name}
             {isSelf && <span className="font-normal text-ink-muted"> (you)</span>}
           </h3>
-          <p className="break-all text-ink-muted">{member.email}</p>
+          {/* Only admins are sent e-mail addresses. */}
+          {member.email && <p className="break-all text-ink-muted">{member.email}</p>}
         </div>
         {member.active ? (
           <StatusTag tone="ok" icon={<CheckIcon className="size-4" />}>
@@ -141,8 +142,8 @@ export function MemberCard({ member, isSelf, canManage }: MemberCardProps) {
         }
       >
         <p>
-          This signs {member.name} out everywhere at once, on every tablet and phone, and they can no longer sign in to
-          this team. You can reactivate them later.
+          This signs {member.name} out of this team on every tablet and phone, and they can no longer sign in to this
+          team. You can reactivate them later.
         </p>
         {update.isError && <ErrorNotice error={update.error} />}
       </Dialog>

@@ -25,6 +25,8 @@ export function TemporaryPasswordDialog({
   const inputRef = useRef<HTMLInputElement>(null);
   const [copy, setCopy] = useState<CopyState>('idle');
   const password = member?.temporaryPassword ?? null;
+  // E-mail addresses are only sent to admins; without one the sentence simply ends sooner.
+  const withEmail = member?.email ? ` with ${member.email}` : '';
 
   async function copyPassword() {
     if (!password) return;
@@ -47,8 +49,8 @@ export function TemporaryPasswordDialog({
         <>
           <p>
             {reason === 'added'
-              ? `Give them this first password so they can sign in with ${member.email}:`
-              : `Their old password no longer works and they are signed out everywhere. Give them this one to sign in with ${member.email}:`}
+              ? `Give them this first password so they can sign in${withEmail}:`
+              : `Their old password no longer works and they are signed out everywhere. Give them this one to sign in${withEmail}:`}
           </p>
           <div className="flex flex-wrap gap-2">
             <label htmlFor="temporary-password" className="sr-only">
@@ -76,9 +78,11 @@ export function TemporaryPasswordDialog({
         </>
       )}
       {member && !password && (
+        // Only a resent add answers without a password: the first attempt made the member, but its
+        // answer (and the one copy of the password) never arrived.
         <p>
-          {member.email} already has a Pitwright account, so they sign in with the password they already use. This
-          team now shows up for them.
+          {member.name} was already added by an earlier attempt whose answer did not arrive, so their first password
+          was never shown. Use Reset password on their card to make a new one.
         </p>
       )}
     </Dialog>
