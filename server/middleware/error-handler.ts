@@ -25,6 +25,11 @@ export const apiNotFound: RequestHandler = (req) => {
 export const errorHandler: ErrorRequestHandler = (error, req, res, next) => {
   if (res.headersSent) return next(error);
   if (error instanceof ZodError) {
+    // A body that is not an object at all (an array, a number) has no fields to name.
+    if (error.issues.every((issue) => issue.path.length === 0 && issue.code === 'invalid_type')) {
+      res.status(400).json({ error: { code: 'invalid', message: 'Send a JSON object as the request body' } });
+      return;
+    }
     const fields = fieldsOf(error);
     const names = Object.keys(fields).join(', ');
     res.status(400).json({ error: { code: 'invalid', message: `Check these fields: ${names}`, fields } });

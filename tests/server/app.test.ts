@@ -109,3 +109,11 @@ describe('error answers', () => {
     expect(logged.mock.calls[0]).toContain(failure);
   });
 });
+
+describe('a body that is not an object', () => {
+  it('answers 400 saying what to send, with no fields to name', async () => {
+    const answer = await request(app).post('/api/session').send([1, 2]);
+    expect(answer.status).toBe(400);
+    expect(answer.body).toEqual({ error: { code: 'invalid', message: 'Send a JSON object as the request body' } });
+  });
+});
