@@ -1,6 +1,6 @@
 import { Passport } from 'passport';
 import { Strategy as LocalStrategy } from 'passport-local';
-import { User } from '../models';
+import { findUserWithMemberships } from './require-auth';
 import { verifyPassword } from './passwords';
 import './types';
 
@@ -9,14 +9,14 @@ export function createPassport() {
   const passport = new Passport();
   passport.use(
     new LocalStrategy({ usernameField: 'email', passwordField: 'password' }, (email, password, done) => {
-      User.findOne({ where: { email } })
+      findUserWithMemberships({ email })
         .then(async (user) => ((await verifyPassword(password, user?.passwordHash)) ? done(null, user!) : done(null, false)))
         .catch(done);
     }),
   );
   passport.serializeUser((user, done) => done(null, user.id));
   passport.deserializeUser((id: string, done) => {
-    User.findByPk(id)
+    findUserWithMemberships({ id })
       .then((user) => done(null, user ?? false))
       .catch(done);
   });

@@ -3,7 +3,7 @@ import type { CsrfSync } from 'csrf-sync';
 import type { createPassport } from '../auth/passport';
 import { changePasswordSchema, signInSchema, switchTeamSchema } from '../../shared/schemas/session';
 import { hashPassword, verifyPassword } from '../auth/passwords';
-import { activeMembershipsOf, authOf, requireAuth } from '../auth/require-auth';
+import { authOf, requireAuth } from '../auth/require-auth';
 import { endSessionsOf } from '../auth/session-store';
 import { passwordChangeLimiter, signInLimiters } from '../auth/failure-limits';
 import { HttpError, notFound } from '../errors';
@@ -32,7 +32,7 @@ export function sessionRouter({ passport, csrf, cookieName }: { passport: Passpo
     req.body = signInSchema.parse(req.body);
     const user = await authenticate(passport, req, res);
     if (!user) throw invalidCredentials();
-    const memberships = await activeMembershipsOf(user.id);
+    const memberships = user.memberships ?? [];
     if (memberships.length === 0) {
       throw new HttpError(403, 'no_active_membership', 'Your account is not active in any team: ask a mentor');
     }
