@@ -62,7 +62,7 @@ export function createApp({ config, sequelize }: { config: Config; sequelize: Se
 
   serveClient(app, config.clientDir);
   app.use(errorHandler);
-  return { app, close: () => store.close() };
+  return { app, sessionMiddleware, passport, close: () => store.close() };
 }
 
 function serveClient(app: express.Express, clientDir: string) {

@@ -1,14 +1,17 @@
 import { loadConfig } from './config';
 import { createApp } from './app';
 import { createSequelize } from './db/sequelize';
+import { attachRealtime } from './realtime/io';
 
 const config = loadConfig();
 const sequelize = createSequelize(config.databaseUrl);
-const { app, close } = createApp({ config, sequelize });
+const built = createApp({ config, sequelize });
+const { app, close } = built;
 
 const server = app.listen(config.port, config.host, () => {
   console.log(`Pitwright server listening on http://${config.host}:${config.port}`);
 });
+const io = attachRealtime(server, built);
 server.on('error', (error) => {
   console.error(`The server could not start: ${error.message}`);
   process.exit(1);
@@ -19,6 +22,7 @@ function shutdown() {
   if (stopping) return;
   stopping = true;
   close();
+  void io.close();
   server.close(() => sequelize.close().finally(() => process.exit(0)));
   server.closeAllConnections();
 }

@@ -2,6 +2,7 @@ import type { UpdateEventInput } from '../../shared/schemas/events';
 import { inTransaction } from '../db/transaction';
 import { HttpError, notFound, stale } from '../errors';
 import { Event, Team } from '../models';
+import { emitToTeam } from '../realtime/broadcast';
 import { presentEvent } from '../presenters/event';
 
 /** Edits an event (refusing a stale `version`) and, with `current: true`, makes it current. */
@@ -18,6 +19,7 @@ export async function updateEvent(teamId: string, eventId: string, { current, ve
     }
     if (event.changed()) await event.save({ transaction });
     if (current) await team.update({ currentEventId: event.id }, { transaction });
+    transaction.afterCommit(() => emitToTeam(teamId, 'events:updated', { id: event.id }));
     return { event, team };
   });
 }

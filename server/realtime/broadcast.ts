@@ -1,0 +1,25 @@
+import type { Server } from 'socket.io';
+
+let io: Server | undefined;
+
+/** Called once the Socket.IO server exists; before that (scripts, some tests) emits go nowhere. */
+export function attachBroadcaster(server: Server | undefined) {
+  io = server;
+}
+
+export const eventRoom = (eventId: string) => `event:${eventId}`;
+export const teamRoom = (teamId: string) => `team:${teamId}`;
+
+/**
+ * Tells every tablet on an event that something changed (`area:verb`, e.g. `field:progressed`).
+ * Payloads are small (`{id}` and what changed): clients refetch what they show. Call it from
+ * `transaction.afterCommit`, so a rolled-back write never reaches a tablet.
+ */
+export function emitToEvent(eventId: string, name: string, payload: object) {
+  io?.to(eventRoom(eventId)).emit(name, payload);
+}
+
+/** Same, for every tablet of a team (team-wide changes such as the current event). */
+export function emitToTeam(teamId: string, name: string, payload: object) {
+  io?.to(teamRoom(teamId)).emit(name, payload);
+}

@@ -1,0 +1,55 @@
+import { beforeAll, expect, it } from 'vitest';
+import type { Socket } from 'socket.io-client';
+import { signIn, type SignedIn } from '../support/app';
+import { makeTeam, PASSWORD } from '../support/factories';
+import { realtimeHarness } from '../support/realtime';
+
+const { app, open } = realtimeHarness();
+let team: Awaited<ReturnType<typeof makeTeam>>;
+let admin: SignedIn;
+let viewer: SignedIn;
+beforeAll(async () => {
+  team = await makeTeam();
+  admin = await signIn(app, team.emails.admin, PASSWORD);
+  viewer = await signIn(app, team.emails.viewer, PASSWORD);
+});
+
+const cookieOf = async (client: SignedIn) => {
+  const answer = await client.get('/api/session');
+  return ([] as string[]).concat(answer.headers['set-cookie'] ?? []).map((cookie) => cookie.split(';')[0]).join('; ');
+};
+const nextEvent = (socket: Socket, name: string) =>
+  new Promise<unknown>((resolve, reject) => {
+    const timer = setTimeout(() => reject(new Error(`no ${name} arrived`)), 5_000);
+    socket.once(name, (payload: unknown) => {
+      clearTimeout(timer);
+      resolve(payload);
+    });
+  });
+
+it('refuses a socket without a session', async () => {
+  const { error } = await open();
+  expect(error?.message).toBe('unauthenticated');
+});
+
+it("a write by one member reaches another member's socket after it commits", async () => {
+  const { socket, error } = await open(await cookieOf(viewer));
+  expect(error).toBeUndefined();
+  const arrived = nextEvent(socket, 'events:updated');
+  const answer = await admin.patch(`/api/events/${team.event.id}`, { name: 'Renamed live' });
+  expect(answer.status).toBe(200);
+  expect(await arrived).toEqual({ id: team.event.id });
+});
+
+it("another team's socket hears nothing of it", async () => {
+  const other = await makeTeam();
+  const outsider = await signIn(app, other.emails.viewer, PASSWORD);
+  const { socket } = await open(await cookieOf(outsider));
+  let heard = false;
+  socket.on('events:updated', () => (heard = true));
+  const mine = await open(await cookieOf(viewer));
+  const arrived = nextEvent(mine.socket, 'events:updated');
+  await admin.patch(`/api/events/${team.event.id}`, { venue: 'Moved hall' });
+  await arrived; // by then the broadcast has gone out to every room it was meant for
+  expect(heard).toBe(false);
+});
