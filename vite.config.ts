@@ -15,6 +15,7 @@ export default defineConfig({
   server: {
     proxy: {
       '/api': { target: apiServer },
+      '/socket.io': { target: apiServer, ws: true },
     },
   },
   build: {

@@ -8,6 +8,7 @@ import { useCurrentEvent } from '../features/events/api/get-events';
 import { useSignOut } from '../features/session/api/sign-out';
 import { TeamSwitcher } from '../features/session/components/team-switcher';
 import { useCan, useViewer } from '../lib/authorization';
+import { LiveStatusTag, type LiveStatus } from './live-updates';
 
 function CurrentEventName() {
   const canRead = useCan('events:read');
@@ -45,7 +46,7 @@ function UserName({ name, className }: { name: string; className: string }) {
   );
 }
 
-export function AppHeader({ memberships }: { memberships: MembershipJson[] }) {
+export function AppHeader({ memberships, liveStatus }: { memberships: MembershipJson[]; liveStatus: LiveStatus }) {
   const { user, membership } = useViewer();
   const navigate = useNavigate();
   const signOut = useSignOut();
@@ -63,6 +64,7 @@ export function AppHeader({ memberships }: { memberships: MembershipJson[] }) {
           <UserName name={user.name} className="flex sm:hidden" />
         </div>
         <div className="ml-auto flex items-center gap-3">
+          <LiveStatusTag status={liveStatus} />
           <UserName name={user.name} className="hidden sm:flex" />
           <Button
             variant="secondary"

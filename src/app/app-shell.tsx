@@ -8,6 +8,7 @@ import { signInPath } from '../lib/safe-next';
 import { useOnline } from '../lib/use-online';
 import { AppHeader } from './app-header';
 import { AppNav } from './app-nav';
+import { useLiveUpdates } from './live-updates';
 
 function OfflineBanner() {
   const online = useOnline();
@@ -26,6 +27,7 @@ export function AppShell() {
   const location = useLocation();
   const navigation = useNavigation();
   const membership = session ? activeMembership(session) : undefined;
+  const liveStatus = useLiveUpdates(membership?.teamId ?? '');
   const viewer = useMemo<Viewer | null>(
     () => (session && membership ? { user: session.user, membership } : null),
     [session, membership],
@@ -50,7 +52,7 @@ export function AppShell() {
       >
         Skip to content
       </a>
-      <AppHeader memberships={session.memberships} />
+      <AppHeader memberships={session.memberships} liveStatus={liveStatus} />
       <OfflineBanner />
       <div className="mx-auto flex w-full max-w-screen-2xl">
         <AppNav />

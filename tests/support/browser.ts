@@ -3,6 +3,7 @@ import path from 'node:path';
 import type { AddressInfo } from 'node:net';
 import { afterAll, beforeAll } from 'vitest';
 import { chromium, type Browser } from 'playwright-core';
+import { attachRealtime } from '../../server/realtime/io';
 import { testApp } from './app';
 
 export const SCREENSHOT_DIR = path.resolve('test-results/screenshots');
@@ -16,16 +17,18 @@ const CHROMIUM_ARGS = ['--no-sandbox', '--disable-gpu', '--disable-quic', '--no-
  */
 export function browserHarness() {
   const built = testApp();
-  const harness = { baseUrl: '', browser: undefined as unknown as Browser };
+  const harness = { app: built.app, baseUrl: '', browser: undefined as unknown as Browser };
   beforeAll(async () => {
     if (!fs.existsSync(path.join(built.config.clientDir, 'index.html'))) throw new Error('No client build: run the tests through `npm test`');
     const server = built.app.listen(0, '127.0.0.1');
     await new Promise((resolve) => server.once('listening', resolve));
+    const io = attachRealtime(server, built);
     harness.baseUrl = `http://127.0.0.1:${(server.address() as AddressInfo).port}`;
     harness.browser = await chromium.launch({ executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium', headless: true, args: CHROMIUM_ARGS });
     fs.mkdirSync(SCREENSHOT_DIR, { recursive: true });
     afterAll(async () => {
       await harness.browser.close();
+      await io.close();
       server.closeAllConnections();
       await new Promise((resolve) => server.close(resolve));
     });

@@ -1,0 +1,55 @@
+import { useEffect, useState } from 'react';
+import { useQueryClient } from '@tanstack/react-query';
+import { io } from 'socket.io-client';
+import { CheckIcon, OfflineIcon } from '../components/ui/icons';
+import { StatusTag } from '../components/ui/status-tag';
+
+export type LiveStatus = 'live' | 'reconnecting' | 'offline';
+
+// Server events (`area:verb`) → the query keys they make stale. Events carry ids only; the
+// queries refetch what each screen shows.
+const STALE_AFTER: Record<string, string[][]> = {
+  'events:updated': [['events'], ['team']],
+  'matches:imported': [['matches'], ['timeline']],
+  'matches:updated': [['matches'], ['timeline']],
+  'field:progressed': [['matches'], ['timeline']],
+};
+
+/**
+ * One Socket.IO connection for the signed-in shell (the session cookie signs it in). After a
+ * reconnect everything on screen is refetched: the socket cannot say what was missed.
+ */
+export function useLiveUpdates(teamId: string): LiveStatus {
+  const queryClient = useQueryClient();
+  const [status, setStatus] = useState<LiveStatus>('reconnecting');
+  useEffect(() => {
+    if (!teamId) return;
+    const socket = io({ withCredentials: true });
+    let connectedBefore = false;
+    socket.on('connect', () => {
+      if (connectedBefore) void queryClient.invalidateQueries();
+      connectedBefore = true;
+      setStatus('live');
+    });
+    socket.on('disconnect', () => setStatus(navigator.onLine ? 'reconnecting' : 'offline'));
+    socket.on('connect_error', () => setStatus(navigator.onLine ? 'reconnecting' : 'offline'));
+    for (const [name, keys] of Object.entries(STALE_AFTER)) {
+      socket.on(name, () => keys.forEach((queryKey) => void queryClient.invalidateQueries({ queryKey })));
+    }
+    return () => {
+      socket.disconnect();
+    };
+  }, [teamId, queryClient]);
+  return status;
+}
+
+/** Whether what the screen shows is live: icon + word + colour. */
+export function LiveStatusTag({ status }: { status: LiveStatus }) {
+  if (status === 'live') return <StatusTag tone="ok" icon={<CheckIcon className="size-4" />}>Live</StatusTag>;
+  if (status === 'offline') return <StatusTag tone="danger" icon={<OfflineIcon className="size-4" />}>Offline</StatusTag>;
+  return (
+    <StatusTag tone="warning" icon={<OfflineIcon className="size-4" />}>
+      Reconnecting…
+    </StatusTag>
+  );
+}
