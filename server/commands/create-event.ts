@@ -2,7 +2,7 @@ import type { CreateEventInput } from '../../shared/schemas/events';
 import { inTransaction } from '../db/transaction';
 import { HttpError } from '../errors';
 import { Event, Team } from '../models';
-import { emitToTeam } from '../realtime/broadcast';
+import { emitToTeam, moveTeamToEvent } from '../realtime/broadcast';
 
 /**
  * Creates an event for a team; the team's first event, or one asked for as current, becomes
@@ -17,7 +17,11 @@ export async function createEvent(teamId: string, { id, current, ...fields }: Cr
       if (existing) throw new HttpError(409, 'id_taken', 'This id is already used by another record');
     }
     const event = await Event.create({ id, teamId, ...fields }, { transaction });
-    if (current || !team.currentEventId) await team.update({ currentEventId: event.id }, { transaction });
+    const previousEventId = team.currentEventId;
+    if (current || !previousEventId) {
+      await team.update({ currentEventId: event.id }, { transaction });
+      transaction.afterCommit(() => moveTeamToEvent(teamId, previousEventId, event.id));
+    }
     transaction.afterCommit(() => emitToTeam(teamId, 'events:updated', { id: event.id }));
     return { event, team, created: true };
   });

@@ -2,7 +2,7 @@ import type { UpdateEventInput } from '../../shared/schemas/events';
 import { inTransaction } from '../db/transaction';
 import { HttpError, notFound, stale } from '../errors';
 import { Event, Team } from '../models';
-import { emitToTeam } from '../realtime/broadcast';
+import { emitToTeam, moveTeamToEvent } from '../realtime/broadcast';
 import { presentEvent } from '../presenters/event';
 
 /** Edits an event (refusing a stale `version`) and, with `current: true`, makes it current. */
@@ -18,7 +18,11 @@ export async function updateEvent(teamId: string, eventId: string, { current, ve
       throw new HttpError(400, 'invalid', 'Check these fields: endDate', { fields: { endDate: 'Must not be before the start date' } });
     }
     if (event.changed()) await event.save({ transaction });
-    if (current) await team.update({ currentEventId: event.id }, { transaction });
+    const previousEventId = team.currentEventId;
+    if (current && previousEventId !== event.id) {
+      await team.update({ currentEventId: event.id }, { transaction });
+      transaction.afterCommit(() => moveTeamToEvent(teamId, previousEventId, event.id));
+    }
     transaction.afterCommit(() => emitToTeam(teamId, 'events:updated', { id: event.id }));
     return { event, team };
   });

@@ -23,3 +23,10 @@ export function emitToEvent(eventId: string, name: string, payload: object) {
 export function emitToTeam(teamId: string, name: string, payload: object) {
   io?.to(teamRoom(teamId)).emit(name, payload);
 }
+
+/** The team's current event changed: its connected sockets follow it to the new event's room. */
+export function moveTeamToEvent(teamId: string, fromEventId: string | null, toEventId: string) {
+  if (!io) return;
+  if (fromEventId) io.in(teamRoom(teamId)).socketsLeave(eventRoom(fromEventId));
+  io.in(teamRoom(teamId)).socketsJoin(eventRoom(toEventId));
+}

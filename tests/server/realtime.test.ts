@@ -3,6 +3,7 @@ import type { Socket } from 'socket.io-client';
 import { signIn, type SignedIn } from '../support/app';
 import { makeTeam, PASSWORD } from '../support/factories';
 import { realtimeHarness } from '../support/realtime';
+import { emitToEvent } from '../../server/realtime/broadcast';
 
 const { app, open } = realtimeHarness();
 let team: Awaited<ReturnType<typeof makeTeam>>;
@@ -52,4 +53,23 @@ it("another team's socket hears nothing of it", async () => {
   await admin.patch(`/api/events/${team.event.id}`, { venue: 'Moved hall' });
   await arrived; // by then the broadcast has gone out to every room it was meant for
   expect(heard).toBe(false);
+});
+
+it('when another event becomes current, connected sockets follow it to that event room', async () => {
+  const own = await makeTeam();
+  const ownAdmin = await signIn(app, own.emails.admin, PASSWORD);
+  const { socket } = await open(await cookieOf(await signIn(app, own.emails.crew, PASSWORD)));
+  const created = await ownAdmin.post('/api/events', {
+    name: 'Second weekend',
+    venue: 'Larchmont Pavilion',
+    timeZone: 'Europe/Berlin',
+    startDate: '2027-04-02',
+    endDate: '2027-04-03',
+    teamNumber: own.team.number,
+    current: true,
+  });
+  expect(created.status).toBe(201);
+  const arrived = nextEvent(socket, 'probe');
+  emitToEvent(created.body.id, 'probe', { ok: true });
+  expect(await arrived).toEqual({ ok: true });
 });
