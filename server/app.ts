@@ -12,9 +12,12 @@ import { SessionStore } from './auth/session-store';
 import { apiNotFound, errorHandler } from './middleware/error-handler';
 import { initModels } from './models';
 import { eventsRouter } from './routes/events';
+import { fieldProgressRouter } from './routes/field-progress';
 import { healthRouter } from './routes/health';
+import { eventMatchesRouter, matchesRouter } from './routes/matches';
 import { sessionRouter } from './routes/session';
 import { teamRouter } from './routes/team';
+import { timelineRouter } from './routes/timeline';
 
 export const SESSION_COOKIE = 'pitwright.sid';
 
@@ -56,7 +59,12 @@ export function createApp({ config, sequelize }: { config: Config; sequelize: Se
   api.use(csrf.csrfSynchronisedProtection);
   api.use('/session', sessionRouter({ passport, csrf, cookieName: SESSION_COOKIE }));
   api.use('/team', requireAuth, teamRouter());
+  // The event's areas before the events router, so that requireAuth runs once per request.
+  api.use('/events/:eventId/matches', requireAuth, eventMatchesRouter());
+  api.use('/events/:eventId/field-progress', requireAuth, fieldProgressRouter());
+  api.use('/events/:eventId/timeline', requireAuth, timelineRouter());
   api.use('/events', requireAuth, eventsRouter());
+  api.use('/matches', requireAuth, matchesRouter());
   api.use(apiNotFound);
   app.use('/api', api);
 

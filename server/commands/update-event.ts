@@ -1,4 +1,4 @@
-import type { UpdateEventInput } from '../../shared/schemas/events';
+import type { EventSettingsInput, UpdateEventInput } from '../../shared/schemas/events';
 import { inTransaction } from '../db/transaction';
 import { HttpError, notFound, stale } from '../errors';
 import { Event, Team } from '../models';
@@ -6,13 +6,14 @@ import { emitToTeam, moveTeamToEvent } from '../realtime/broadcast';
 import { presentEvent } from '../presenters/event';
 
 /** Edits an event (refusing a stale `version`) and, with `current: true`, makes it current. */
-export async function updateEvent(teamId: string, eventId: string, { current, version, ...fields }: UpdateEventInput) {
+export async function updateEvent(teamId: string, eventId: string, { current, version, settings, ...fields }: UpdateEventInput) {
   return inTransaction(async (transaction) => {
     const team = await Team.findByPk(teamId, { transaction, lock: transaction.LOCK.UPDATE, rejectOnEmpty: true });
     const event = await Event.findOne({ where: { id: eventId, teamId }, transaction, lock: transaction.LOCK.UPDATE });
     if (!event) throw notFound('Event');
     if (version !== undefined && version !== event.version) throw stale(presentEvent(event, team.currentEventId));
     event.set(fields);
+    if (settings) event.set(settingsColumns(settings));
     // The schema compares the two dates only when both are sent; one may be the stored one.
     if (event.endDate < event.startDate) {
       throw new HttpError(400, 'invalid', 'Check these fields: endDate', { fields: { endDate: 'Must not be before the start date' } });
@@ -26,4 +27,10 @@ export async function updateEvent(teamId: string, eventId: string, { current, ve
     transaction.afterCommit(() => emitToTeam(teamId, 'events:updated', { id: event.id }));
     return { event, team };
   });
+}
+
+// Settings arrive nested as the client shows them; the columns are flat, one queue lead set.
+function settingsColumns({ queueLead, ...rest }: EventSettingsInput) {
+  const lead = queueLead ? { queueLeadMatches: queueLead.matches ?? null, queueLeadMinutes: queueLead.minutes ?? null } : {};
+  return { ...rest, ...lead };
 }

@@ -6,7 +6,10 @@ import {
   type InferAttributes,
   type InferCreationAttributes,
   type Sequelize,
+  type Transaction,
 } from 'sequelize';
+import { notFound } from '../errors';
+import { TIMELINE_DEFAULTS } from '../../shared/domain/timeline';
 import type { Team } from './team';
 
 /** A competition weekend; dates are the venue's calendar days, instants elsewhere are UTC. */
@@ -19,9 +22,26 @@ export class Event extends Model<InferAttributes<Event>, InferCreationAttributes
   declare startDate: string;
   declare endDate: string;
   declare teamNumber: number;
+  // Timeline settings; exactly one of the two queue leads is set (a CHECK in the database).
+  declare queueLeadMatches: CreationOptional<number | null>;
+  declare queueLeadMinutes: CreationOptional<number | null>;
+  declare matchLengthSeconds: CreationOptional<number>;
+  declare returnToPitMinutes: CreationOptional<number>;
+  declare tightTurnaroundMinutes: CreationOptional<number>;
+  declare allowRunningAhead: CreationOptional<boolean>;
   declare version: CreationOptional<number>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
+
+  /**
+   * The team's event, or 404 "Event not found": another team's event is never told apart from
+   * a missing one. With `lock`, schedule writes of one event queue behind each other.
+   */
+  static async ofTeam(teamId: string, eventId: string, { transaction, lock = false }: { transaction?: Transaction; lock?: boolean } = {}) {
+    const event = await Event.findOne({ where: { id: eventId, teamId }, transaction, ...(lock && transaction ? { lock: transaction.LOCK.UPDATE } : {}) });
+    if (!event) throw notFound('Event');
+    return event;
+  }
 
   static initModel(sequelize: Sequelize) {
     Event.init(
@@ -33,6 +53,13 @@ export class Event extends Model<InferAttributes<Event>, InferCreationAttributes
         startDate: { type: DataTypes.DATEONLY, allowNull: false },
         endDate: { type: DataTypes.DATEONLY, allowNull: false },
         teamNumber: { type: DataTypes.INTEGER, allowNull: false },
+        // Defaults repeated from the migration so that a created instance answers them at once.
+        queueLeadMatches: { type: DataTypes.INTEGER, allowNull: true, defaultValue: TIMELINE_DEFAULTS.queueLead.matches },
+        queueLeadMinutes: { type: DataTypes.INTEGER, allowNull: true, defaultValue: null },
+        matchLengthSeconds: { type: DataTypes.INTEGER, allowNull: false, defaultValue: TIMELINE_DEFAULTS.matchLengthSeconds },
+        returnToPitMinutes: { type: DataTypes.INTEGER, allowNull: false, defaultValue: TIMELINE_DEFAULTS.returnToPitMinutes },
+        tightTurnaroundMinutes: { type: DataTypes.INTEGER, allowNull: false, defaultValue: TIMELINE_DEFAULTS.tightTurnaroundMinutes },
+        allowRunningAhead: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: TIMELINE_DEFAULTS.allowRunningAhead },
         version: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
         createdAt: DataTypes.DATE(3),
         updatedAt: DataTypes.DATE(3),

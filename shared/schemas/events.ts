@@ -39,9 +39,34 @@ export const createEventSchema = eventFields
   .refine(endNotBeforeStart, endDateIssue);
 export type CreateEventInput = z.infer<typeof createEventSchema>;
 
+const wholeIn = (min: number, max: number, unit: string) => {
+  const message = `A whole number of ${unit} from ${min} to ${max}`;
+  return z.number({ message }).int({ message }).min(min, { message }).max(max, { message });
+};
+
+/** Event settings the timeline reads; each may be sent alone. */
+export const eventSettingsSchema = z
+  .object({
+    // Either a number of matches or of minutes, never both: the timeline reads exactly one.
+    queueLead: z
+      .object({ matches: wholeIn(1, 20, 'matches').optional(), minutes: wholeIn(1, 240, 'minutes').optional() })
+      .strict()
+      .refine((lead) => (lead.matches === undefined) !== (lead.minutes === undefined), {
+        message: 'Give either matches or minutes',
+      }),
+    matchLengthSeconds: wholeIn(30, 900, 'seconds'),
+    returnToPitMinutes: wholeIn(0, 60, 'minutes'),
+    tightTurnaroundMinutes: wholeIn(0, 240, 'minutes'),
+    allowRunningAhead: z.boolean({ message: 'true or false' }),
+  })
+  .partial()
+  .strict();
+export type EventSettingsInput = z.infer<typeof eventSettingsSchema>;
+
 export const updateEventSchema = eventFields
   .partial()
   .extend({
+    settings: eventSettingsSchema.optional(),
     current: z.literal(true, { message: 'Only true: make another event current to replace it' }).optional(),
     version: versionField.optional(),
   })
@@ -57,8 +82,18 @@ export interface EventJson {
   startDate: string;
   endDate: string;
   teamNumber: number;
+  settings: EventSettingsJson;
   current: boolean;
   version: number;
   createdAt: string;
   updatedAt: string;
+}
+
+/** The timeline settings as answered: one queue lead, the rest always present. */
+export interface EventSettingsJson {
+  queueLead: { matches: number } | { minutes: number };
+  matchLengthSeconds: number;
+  returnToPitMinutes: number;
+  tightTurnaroundMinutes: number;
+  allowRunningAhead: boolean;
 }

@@ -58,3 +58,12 @@ export const eventBody = (overrides: Record<string, unknown> = {}) => ({
 
 /** A second team for an existing account, as an operator would link it (the API refuses to). */
 export const joinTeam = (userId: string, teamId: string, roles: Role[]) => Membership.create({ teamId, userId, roles });
+
+/** The timeline settings every new event starts with. */
+export const DEFAULT_SETTINGS = {
+  queueLead: { matches: 2 },
+  matchLengthSeconds: 150,
+  returnToPitMinutes: 5,
+  tightTurnaroundMinutes: 20,
+  allowRunningAhead: false,
+};

@@ -2,7 +2,7 @@ import { randomUUID } from 'node:crypto';
 import { beforeAll, describe, expect, it } from 'vitest';
 import { signIn, testApp, type SignedIn } from '../../support/app';
 import { invalid } from '../../support/errors';
-import { eventBody, makeTeam, makeTeamWithoutEvent, PASSWORD, type FactoryTeam } from '../../support/factories';
+import { DEFAULT_SETTINGS, eventBody, makeTeam, makeTeamWithoutEvent, PASSWORD, type FactoryTeam } from '../../support/factories';
 
 // POST /api/events. Signed-out and per-role answers are in events.test.ts.
 const { app } = testApp();
@@ -80,6 +80,7 @@ describe('POST /api/events: success', () => {
       startDate: '2027-03-04',
       endDate: '2027-03-06',
       teamNumber: 24321,
+      settings: DEFAULT_SETTINGS,
       current: false, // the team already has a current event
       version: 0,
       createdAt: expect.stringMatching(/^\d{4}-\d\d-\d\dT\d\d:\d\d:\d\d\.\d{3}Z$/),

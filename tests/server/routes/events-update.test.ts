@@ -1,7 +1,7 @@
 import { beforeAll, describe, expect, it } from 'vitest';
 import { signIn, testApp, type SignedIn } from '../../support/app';
 import { invalid } from '../../support/errors';
-import { eventBody, makeTeam, PASSWORD, type FactoryTeam } from '../../support/factories';
+import { DEFAULT_SETTINGS, eventBody, makeTeam, PASSWORD, type FactoryTeam } from '../../support/factories';
 
 // PATCH /api/events/:eventId. Signed-out, per-role, bad eventId and foreign-team answers are
 // in events.test.ts.
@@ -74,6 +74,48 @@ describe('PATCH /api/events/:eventId: bad input', () => {
   });
 });
 
+describe('PATCH /api/events/:eventId: settings', () => {
+  const cases: [string, Record<string, unknown>, Record<string, string>][] = [
+    ['both queue leads', { queueLead: { matches: 2, minutes: 10 } }, { 'settings.queueLead': 'Give either matches or minutes' }],
+    ['no queue lead', { queueLead: {} }, { 'settings.queueLead': 'Give either matches or minutes' }],
+    ['a queue lead of 0 matches', { queueLead: { matches: 0 } }, { 'settings.queueLead.matches': 'A whole number of matches from 1 to 20' }],
+    ['a queue lead of 241 minutes', { queueLead: { minutes: 241 } }, { 'settings.queueLead.minutes': 'A whole number of minutes from 1 to 240' }],
+    ['a match of 10 seconds', { matchLengthSeconds: 10 }, { 'settings.matchLengthSeconds': 'A whole number of seconds from 30 to 900' }],
+    ['a return to pit of 2.5 minutes', { returnToPitMinutes: 2.5 }, { 'settings.returnToPitMinutes': 'A whole number of minutes from 0 to 60' }],
+    ['a tight threshold below 0', { tightTurnaroundMinutes: -1 }, { 'settings.tightTurnaroundMinutes': 'A whole number of minutes from 0 to 240' }],
+    ['running ahead as text', { allowRunningAhead: 'yes' }, { 'settings.allowRunningAhead': 'true or false' }],
+    ['an unknown setting', { pitCount: 2 }, { 'settings.pitCount': 'Not a field of this request' }],
+  ];
+  for (const [what, settings, fields] of cases) {
+    it(`answers 400 for ${what}, naming the setting, and changes nothing`, async () => {
+      const answer = await admin.patch(`/api/events/${team.event.id}`, { settings });
+      expect(answer.status).toBe(400);
+      expect(answer.body).toEqual(invalid(fields));
+      expect((await admin.get(`/api/events/${team.event.id}`)).body.settings).toEqual(DEFAULT_SETTINGS);
+    });
+  }
+
+  it('changes the settings sent, keeps the others, and switches the queue lead between matches and minutes', async () => {
+    const own = await ownTeam();
+    const byMinutes = await own.admin.patch(own.url, { settings: { queueLead: { minutes: 12 }, allowRunningAhead: true }, version: 0 });
+    expect(byMinutes.status).toBe(200);
+    expect(byMinutes.body.settings).toEqual({ ...DEFAULT_SETTINGS, queueLead: { minutes: 12 }, allowRunningAhead: true });
+    expect(byMinutes.body.version).toBe(1);
+
+    const back = await own.admin.patch(own.url, { settings: { queueLead: { matches: 3 }, matchLengthSeconds: 165, returnToPitMinutes: 4, tightTurnaroundMinutes: 25 } });
+    expect(back.body.settings).toEqual({ queueLead: { matches: 3 }, matchLengthSeconds: 165, returnToPitMinutes: 4, tightTurnaroundMinutes: 25, allowRunningAhead: true });
+    expect((await own.admin.get(own.url)).body).toEqual(back.body);
+  });
+
+  it('is for admins only: a lead may not change settings', async () => {
+    const own = await ownTeam();
+    const lead = await signIn(app, own.emails.lead, PASSWORD);
+    const answer = await lead.patch(own.url, { settings: { matchLengthSeconds: 160 } });
+    expect(answer.status).toBe(403);
+    expect((await own.admin.get(own.url)).body.settings).toEqual(DEFAULT_SETTINGS);
+  });
+});
+
 describe('PATCH /api/events/:eventId: success', () => {
   it('changes every field, keeps the time zone exactly and counts the version up', async () => {
     const own = await ownTeam();
@@ -83,6 +125,7 @@ describe('PATCH /api/events/:eventId: success', () => {
     expect(answer.body).toEqual({
       id: own.event.id,
       ...changes,
+      settings: DEFAULT_SETTINGS,
       current: true,
       version: 1,
       createdAt: own.event.createdAt.toISOString(),

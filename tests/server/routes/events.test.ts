@@ -3,7 +3,7 @@ import request from 'supertest';
 import { ROLES, type Role } from '../../../shared/roles';
 import { signIn, signInEveryRole, testApp, type SignedIn } from '../../support/app';
 import { FORBIDDEN, invalid, UNAUTHENTICATED } from '../../support/errors';
-import { eventBody, makeTeam, PASSWORD, type FactoryTeam } from '../../support/factories';
+import { DEFAULT_SETTINGS, eventBody, makeTeam, PASSWORD, type FactoryTeam } from '../../support/factories';
 
 // Creating is in events-create.test.ts and editing in events-update.test.ts; this file holds
 // reading, the signed-out and role rungs of every events route, and team isolation.
@@ -23,6 +23,7 @@ const presented = (event: FactoryTeam['event'], current: boolean) => ({
   startDate: event.startDate,
   endDate: event.endDate,
   teamNumber: event.teamNumber,
+  settings: DEFAULT_SETTINGS,
   current,
   version: 0,
   createdAt: event.createdAt.toISOString(),

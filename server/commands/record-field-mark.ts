@@ -1,0 +1,22 @@
+import type { FieldProgressInput } from '../../shared/schemas/schedule';
+import { inTransaction } from '../db/transaction';
+import { notFound } from '../errors';
+import { Event, FieldMark, Match } from '../models';
+import { presentMatchWithStart } from '../presenters/match';
+import { emitToEvent } from '../realtime/broadcast';
+
+/** Records that a match of the event went on the field (now, unless `startedAt` says when), and who said so. */
+export async function recordFieldMark(teamId: string, eventId: string, userId: string, { matchId, startedAt }: FieldProgressInput) {
+  return inTransaction(async (transaction) => {
+    // The event's row lock puts marks and undos of one event in one order.
+    const event = await Event.ofTeam(teamId, eventId, { transaction, lock: true });
+    const match = await Match.findOne({ where: { id: matchId, eventId: event.id }, transaction });
+    if (!match) throw notFound('Match');
+    await FieldMark.create(
+      { eventId: event.id, matchId: match.id, startedAt: startedAt ? new Date(startedAt) : new Date(), markedById: userId },
+      { transaction },
+    );
+    transaction.afterCommit(() => emitToEvent(event.id, 'field:progressed', { eventId: event.id, matchId: match.id }));
+    return presentMatchWithStart(match, transaction);
+  });
+}

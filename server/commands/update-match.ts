@@ -1,0 +1,26 @@
+import type { UpdateMatchInput } from '../../shared/schemas/schedule';
+import { inTransaction } from '../db/transaction';
+import { notFound, stale } from '../errors';
+import { Event, Match } from '../models';
+import { presentMatchWithStart } from '../presenters/match';
+import { emitToEvent } from '../realtime/broadcast';
+import { assertSlotFree, matchColumns } from './match-columns';
+
+/** Edits one match of a team's event, refusing a stale `version`. */
+export async function updateMatch(teamId: string, matchId: string, { version, ...fields }: UpdateMatchInput) {
+  return inTransaction(async (transaction) => {
+    // Found through its event, so another team's match is simply not found.
+    const found = await Match.findOne({ where: { id: matchId }, include: [{ model: Event, as: 'event', where: { teamId }, attributes: [] }], transaction });
+    if (!found) throw notFound('Match');
+    await Event.ofTeam(teamId, found.eventId, { transaction, lock: true });
+    const match = await Match.findByPk(matchId, { transaction, lock: transaction.LOCK.UPDATE, rejectOnEmpty: true });
+    if (version !== undefined && version !== match.version) throw stale(await presentMatchWithStart(match, transaction));
+    match.set(matchColumns(fields));
+    if (match.changed('level') || match.changed('number')) await assertSlotFree(match.eventId, match.level, match.number, match.id, transaction);
+    if (match.changed()) {
+      await match.save({ transaction });
+      transaction.afterCommit(() => emitToEvent(match.eventId, 'matches:updated', { eventId: match.eventId, id: match.id }));
+    }
+    return presentMatchWithStart(match, transaction);
+  });
+}
