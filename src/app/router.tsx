@@ -13,6 +13,7 @@ import { AppShell } from './app-shell';
 import { RequireCapability } from './require-capability';
 import { NotFound, RouteError } from './route-error';
 import { BoardRoute } from './routes/board-route';
+import { ScheduleRoute } from './routes/schedule-route';
 import { TeamRoute } from './routes/team-route';
 
 /** A page only members whose roles grant the capability may open. */
@@ -61,6 +62,10 @@ export function createAppRouter(queryClient: QueryClient) {
             {
               index: true,
               element: guarded('board:read', <BoardRoute />),
+            },
+            {
+              path: 'schedule',
+              element: guarded('board:read', <ScheduleRoute />),
             },
             {
               path: 'events',

@@ -1,4 +1,5 @@
 import type { ApiError as ApiErrorBody } from '@shared/schemas/common';
+import { noteServerDate } from './server-clock';
 
 const NETWORK_MESSAGE = 'Cannot reach the Pitwright server. Check the Wi-Fi, then try again.';
 
@@ -112,6 +113,8 @@ async function send<T>(method: Method, path: string, options: RequestOptions, is
     if (options.signal?.aborted) throw cause;
     throw new ApiError({ status: 0, code: 'network', message: NETWORK_MESSAGE });
   }
+  // Every answer, error or not, tells the server's time: countdowns read against it.
+  noteServerDate(response.headers.get('date'));
 
   if (response.ok) {
     if (response.status === 204) return undefined as T;

@@ -1,9 +1,20 @@
+import type { EventJson } from '@shared/schemas/events';
 import { ErrorNotice } from '../../components/ui/error-notice';
 import { Loading } from '../../components/ui/loading';
 import { BoardPage } from '../../features/board/components/board-page';
+import { NextMatchPanel } from '../../features/board/components/next-match-panel';
 import { useEvents } from '../../features/events/api/get-events';
+import { useMatches } from '../../features/schedule/api/get-matches';
+import { useTimeline } from '../../features/schedule/api/get-timeline';
 
-/** Feeds the events feature's data into the board, which must not import another feature. */
+/** The schedule feature's data, fed into the board's next-match panel. */
+function NextMatch({ event }: { event: EventJson }) {
+  const timeline = useTimeline(event.id);
+  const matches = useMatches(event.id);
+  return <NextMatchPanel timeline={timeline} matches={matches} teamNumber={event.teamNumber} timeZone={event.timeZone} />;
+}
+
+/** Feeds the events and schedule features' data into the board, which must not import another feature. */
 export function BoardRoute() {
   const events = useEvents();
   if (events.isPending) return <Loading label="Loading the board" />;
@@ -18,5 +29,11 @@ export function BoardRoute() {
     );
   }
   const currentEvent = events.data.find((event) => event.current) ?? null;
-  return <BoardPage currentEvent={currentEvent} hasEvents={events.data.length > 0} />;
+  return (
+    <BoardPage
+      currentEvent={currentEvent}
+      hasEvents={events.data.length > 0}
+      nextMatch={currentEvent && <NextMatch key={currentEvent.id} event={currentEvent} />}
+    />
+  );
 }

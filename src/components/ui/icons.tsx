@@ -133,3 +133,49 @@ export const UserIcon = (p: IconProps) => (
     <path d="M4 21c.9-4 4-6.5 8-6.5s7.1 2.5 8 6.5" />
   </Icon>
 );
+
+/** The schedule: a list of slots against a clock face, our own drawing. */
+export const ScheduleIcon = (p: IconProps) => (
+  <Icon {...p}>
+    <path d="M3 5h9M3 10h6M3 15h5M3 20h8" />
+    <circle cx="17" cy="14" r="5" />
+    <path d="M17 11.5V14l1.8 1.2" />
+  </Icon>
+);
+
+export const ClockIcon = (p: IconProps) => (
+  <Icon {...p}>
+    <circle cx="12" cy="12" r="9" />
+    <path d="M12 7v5l3 2" />
+  </Icon>
+);
+
+/** Queue call: a person walking toward a marker. */
+export const QueueIcon = (p: IconProps) => (
+  <Icon {...p}>
+    <circle cx="9" cy="4.5" r="2" />
+    <path d="M7 21l2-6 3 2v4M9 15l-1-5 4 1 2 3M8 10l-3 3" />
+    <path d="M19 21V8M19 8h-3l1.5-2.5L16 3h3" />
+  </Icon>
+);
+
+export const StarIcon = (p: IconProps) => (
+  <Icon {...p}>
+    <path d="M12 3.5l2.6 5.3 5.9.9-4.3 4.1 1 5.8-5.2-2.7-5.2 2.7 1-5.8-4.3-4.1 5.9-.9L12 3.5z" fill="currentColor" fillOpacity={0.25} />
+  </Icon>
+);
+
+/** The field has the match: a play triangle inside a rounded field outline. */
+export const FieldIcon = (p: IconProps) => (
+  <Icon {...p}>
+    <rect x="2.5" y="5" width="19" height="14" rx="3" />
+    <path d="M10 9v6l5-3-5-3z" fill="currentColor" />
+  </Icon>
+);
+
+export const UndoIcon = (p: IconProps) => (
+  <Icon {...p}>
+    <path d="M9 14L4 9l5-5" />
+    <path d="M4 9h10.5a5.5 5.5 0 0 1 0 11H11" />
+  </Icon>
+);

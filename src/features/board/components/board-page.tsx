@@ -1,3 +1,4 @@
+import type { ReactNode } from 'react';
 import type { EventJson } from '@shared/schemas/events';
 import { LinkButton } from '../../../components/ui/button';
 import { CalendarIcon, PlusIcon } from '../../../components/ui/icons';
@@ -34,11 +35,23 @@ function NoCurrentEvent({ hasEvents }: { hasEvents: boolean }) {
   );
 }
 
-/** The pit board. For now it holds the current event; the next-match card joins it above. */
-export function BoardPage({ currentEvent, hasEvents }: { currentEvent: EventJson | null; hasEvents: boolean }) {
+/**
+ * The pit board: our next match leads (what the crew acts on), the current event follows. The
+ * route fills `nextMatch` from the schedule feature, which this feature must not import.
+ */
+export function BoardPage({
+  currentEvent,
+  hasEvents,
+  nextMatch,
+}: {
+  currentEvent: EventJson | null;
+  hasEvents: boolean;
+  nextMatch?: ReactNode;
+}) {
   return (
     <div className="flex flex-col gap-6">
       <h1 className="sr-only">Pit board</h1>
+      {currentEvent && nextMatch}
       {currentEvent ? <CurrentEventCard event={currentEvent} /> : <NoCurrentEvent hasEvents={hasEvents} />}
     </div>
   );
