@@ -3,6 +3,7 @@ import type { Socket } from 'socket.io-client';
 import { signIn, type SignedIn } from '../support/app';
 import { makeTeam, PASSWORD } from '../support/factories';
 import { realtimeHarness } from '../support/realtime';
+import { matchBody } from '../support/schedule';
 import { emitToEvent } from '../../server/realtime/broadcast';
 
 const { app, open } = realtimeHarness();
@@ -72,4 +73,15 @@ it('when another event becomes current, connected sockets follow it to that even
   const arrived = nextEvent(socket, 'probe');
   emitToEvent(created.body.id, 'probe', { ok: true });
   expect(await arrived).toEqual({ ok: true });
+});
+
+it('a field mark by the lead reaches a crew tablet on the event, with the event and match ids', async () => {
+  const lead = await signIn(app, team.emails.lead, PASSWORD);
+  const match = await lead.post(`/api/events/${team.event.id}/matches`, matchBody({ number: 7 }));
+  expect(match.status).toBe(201);
+  const { socket } = await open(await cookieOf(await signIn(app, team.emails.crew, PASSWORD)));
+  const arrived = nextEvent(socket, 'field:progressed');
+  const marked = await lead.post(`/api/events/${team.event.id}/field-progress`, { matchId: match.body.id });
+  expect(marked.status).toBe(201);
+  expect(await arrived).toEqual({ eventId: team.event.id, matchId: match.body.id });
 });
