@@ -1,9 +1,14 @@
 /**
- * `npm run bench`: request rates and latencies of the main read paths against a running
- * Pitwright (`npm start` first). Prints figures; asserts nothing. Loopback only.
- *   BENCH_URL (default http://127.0.0.1:5180), BENCH_SECONDS (default 5), BENCH_CONNECTIONS (20)
+ * `npm run bench`: figures, no assertions. Three parts:
+ *  1. the timeline computation for 200 matches (median time per call, in-process);
+ *  2. request rates and latencies of the main reads against a running Pitwright (`npm start`);
+ *  3. fan-out: from a field mark to its receipt on 50 connected sockets (p50, p95, p99).
+ * Loopback only. BENCH_URL (default http://127.0.0.1:5180), BENCH_SECONDS (5), BENCH_CONNECTIONS (20).
+ * Part 3 marks the demo's next match and undoes it again, so the data ends as it began.
  */
 import autocannon from 'autocannon';
+import { io } from 'socket.io-client';
+import { computeTimeline, TIMELINE_DEFAULTS } from '../shared/domain/timeline.ts';
 
 const baseUrl = process.env.BENCH_URL ?? 'http://127.0.0.1:5180';
 const duration = Number(process.env.BENCH_SECONDS ?? 5);
@@ -12,19 +17,93 @@ if (!/^http:\/\/(127\.\d+\.\d+\.\d+|localhost|\[::1\])(:\d+)?$/.test(baseUrl)) {
   throw new Error('BENCH_URL must be a loopback address');
 }
 
-const signIn = await fetch(`${baseUrl}/api/session`, {
-  method: 'POST',
-  headers: { 'content-type': 'application/json' },
-  body: JSON.stringify({ email: 'viewer@demo.pitwright.test', password: 'pitwright-demo' }),
-});
-if (!signIn.ok) throw new Error(`Sign-in as the demo viewer failed (${signIn.status}): is npm start running with the demo?`);
-const cookie = signIn.headers.getSetCookie().map((value) => value.split(';')[0]).join('; ');
+const percentile = (sorted, p) => sorted[Math.min(sorted.length - 1, Math.floor((p / 100) * sorted.length))];
+const ms = (value) => value.toFixed(value < 1 ? 3 : 1);
 
-const paths = ['/api/health', '/api/session', '/api/team', '/api/team/members', '/api/events'];
-console.log(`${connections} connections, ${duration} s per path, against ${baseUrl}\n`);
-console.log('path                     req/s    p50 ms   p99 ms   non-2xx');
-for (const path of paths) {
-  const result = await autocannon({ url: `${baseUrl}${path}`, connections, duration, headers: { cookie } });
-  const row = [path.padEnd(22), String(Math.round(result.requests.average)).padStart(7), String(result.latency.p50).padStart(9), String(result.latency.p99).padStart(8), String(result.non2xx).padStart(9)];
-  console.log(row.join(' '));
+function benchTimeline() {
+  const start = Date.parse('2027-03-05T15:00:00Z');
+  const matches = Array.from({ length: 200 }, (_, i) => ({
+    id: `m${i + 1}`,
+    level: 'qualification',
+    number: i + 1,
+    scheduledStart: new Date(start + i * 7 * 60_000).toISOString(),
+    startedAt: i < 60 ? new Date(start + i * 7.3 * 60_000).toISOString() : null,
+    red: [20001 + i, 20201 + i, 20401 + i],
+    blue: i % 7 === 0 ? [28417, 20601 + i, 20801 + i] : [20601 + i, 20801 + i, 21001 + i],
+  }));
+  const settings = { ...TIMELINE_DEFAULTS, teamNumber: 28417 };
+  const now = new Date(start + 61 * 7.3 * 60_000);
+  for (let i = 0; i < 200; i++) computeTimeline(matches, settings, now); // warm-up
+  const times = [];
+  for (let i = 0; i < 1000; i++) {
+    const t0 = performance.now();
+    computeTimeline(matches, settings, now);
+    times.push(performance.now() - t0);
+  }
+  times.sort((a, b) => a - b);
+  console.log(`timeline, 200 matches: median ${ms(percentile(times, 50))} ms per call, p99 ${ms(percentile(times, 99))} ms (1000 calls)\n`);
 }
+
+async function signIn(role) {
+  const answer = await fetch(`${baseUrl}/api/session`, {
+    method: 'POST',
+    headers: { 'content-type': 'application/json' },
+    body: JSON.stringify({ email: `${role}@demo.pitwright.test`, password: 'pitwright-demo' }),
+  });
+  if (!answer.ok) throw new Error(`Sign-in as the demo ${role} failed (${answer.status}): is npm start running with the demo?`);
+  const cookie = answer.headers.getSetCookie().map((value) => value.split(';')[0]).join('; ');
+  return { cookie, csrfToken: (await answer.json()).csrfToken };
+}
+
+async function benchReads(cookie) {
+  const paths = ['/api/health', '/api/session', '/api/team', '/api/team/members', '/api/events'];
+  console.log(`reads: ${connections} connections, ${duration} s per path`);
+  console.log('path                     req/s    p50 ms   p99 ms   non-2xx');
+  for (const path of paths) {
+    const result = await autocannon({ url: `${baseUrl}${path}`, connections, duration, headers: { cookie } });
+    const row = [path.padEnd(22), String(Math.round(result.requests.average)).padStart(7), String(result.latency.p50).padStart(9), String(result.latency.p99).padStart(8), String(result.non2xx).padStart(9)];
+    console.log(row.join(' '));
+  }
+  console.log('');
+}
+
+async function benchFanOut(viewer, lead, { clients = 50, writes = 20 } = {}) {
+  const get = (path, session) => fetch(`${baseUrl}${path}`, { headers: { cookie: session.cookie } }).then((r) => r.json());
+  const send = (method, path, body) =>
+    fetch(`${baseUrl}${path}`, {
+      method,
+      headers: { cookie: lead.cookie, 'x-csrf-token': lead.csrfToken, 'content-type': 'application/json' },
+      body: body && JSON.stringify(body),
+    });
+  const event = (await get('/api/events', lead)).find((each) => each.current);
+  const next = (await get(`/api/events/${event.id}/matches`, lead)).find((match) => match.startedAt === null);
+  if (!next) throw new Error('No unstarted match in the current event to mark');
+
+  const sockets = await Promise.all(
+    Array.from({ length: clients }, () => {
+      const socket = io(baseUrl, { transports: ['websocket'], extraHeaders: { cookie: viewer.cookie }, reconnection: false });
+      return new Promise((resolve, reject) => {
+        socket.once('connect', () => resolve(socket));
+        socket.once('connect_error', reject);
+      });
+    }),
+  );
+  const latencies = [];
+  for (let write = 0; write < writes; write++) {
+    const arrivals = sockets.map((socket) => new Promise((resolve) => socket.once('field:progressed', () => resolve(performance.now()))));
+    const sentAt = performance.now();
+    const answer = write % 2 === 0 ? await send('POST', `/api/events/${event.id}/field-progress`, { matchId: next.id }) : await send('DELETE', `/api/events/${event.id}/field-progress/latest`);
+    if (!answer.ok) throw new Error(`The field mark failed (${answer.status})`);
+    for (const arrivedAt of await Promise.all(arrivals)) latencies.push(arrivedAt - sentAt);
+  }
+  if (writes % 2 === 1) await send('DELETE', `/api/events/${event.id}/field-progress/latest`);
+  for (const socket of sockets) socket.disconnect();
+  latencies.sort((a, b) => a - b);
+  console.log(`fan-out: ${writes} field marks to ${clients} sockets, write sent → event received`);
+  console.log(`  p50 ${ms(percentile(latencies, 50))} ms   p95 ${ms(percentile(latencies, 95))} ms   p99 ${ms(percentile(latencies, 99))} ms   (${latencies.length} receipts)`);
+}
+
+benchTimeline();
+const viewer = await signIn('viewer');
+await benchReads(viewer.cookie);
+await benchFanOut(viewer, await signIn('lead'));
