@@ -15,6 +15,7 @@ import { eventsRouter } from './routes/events';
 import { fieldProgressRouter } from './routes/field-progress';
 import { healthRouter } from './routes/health';
 import { eventMatchesRouter, matchesRouter } from './routes/matches';
+import { screenBoardRouter, screensRouter } from './routes/screens';
 import { sessionRouter } from './routes/session';
 import { teamRouter } from './routes/team';
 import { timelineRouter } from './routes/timeline';
@@ -55,9 +56,12 @@ export function createApp({ config, sequelize }: { config: Config; sequelize: Se
 
   const api = Router();
   api.use('/health', healthRouter(() => sequelize.authenticate()));
+  // Pit screens read with their token alone: before the session, so a TV never gets a cookie.
+  api.use('/screen', screenBoardRouter());
   api.use(express.json({ limit: '1mb' }), sessionMiddleware, passport.initialize(), passport.session());
   api.use(csrf.csrfSynchronisedProtection);
   api.use('/session', sessionRouter({ passport, csrf, cookieName: SESSION_COOKIE }));
+  api.use('/team/screens', requireAuth, screensRouter());
   api.use('/team', requireAuth, teamRouter());
   // The event's areas before the events router, so that requireAuth runs once per request.
   api.use('/events/:eventId/matches', requireAuth, eventMatchesRouter());

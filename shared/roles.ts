@@ -37,6 +37,7 @@ export const CAPABILITIES = {
   'incidents:read': ['admin', 'safety'],
   'alerts:manage': ['admin', 'safety'],
   'mailbox:read': ['admin'],
+  'screens:manage': ['admin'],
 } as const satisfies Record<string, readonly Role[]>;
 
 export type Capability = keyof typeof CAPABILITIES;

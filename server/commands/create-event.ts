@@ -22,7 +22,7 @@ export async function createEvent(teamId: string, { id, current, ...fields }: Cr
       await team.update({ currentEventId: event.id }, { transaction });
       transaction.afterCommit(() => moveTeamToEvent(teamId, previousEventId, event.id));
     }
-    transaction.afterCommit(() => emitToTeam(teamId, 'events:updated', { id: event.id }));
+    transaction.afterCommit(() => emitToTeam(teamId, 'events:updated', { id: event.id }, { withScreens: true }));
     return { event, team, created: true };
   });
 }

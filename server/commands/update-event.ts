@@ -24,7 +24,7 @@ export async function updateEvent(teamId: string, eventId: string, { current, ve
       await team.update({ currentEventId: event.id }, { transaction });
       transaction.afterCommit(() => moveTeamToEvent(teamId, previousEventId, event.id));
     }
-    transaction.afterCommit(() => emitToTeam(teamId, 'events:updated', { id: event.id }));
+    transaction.afterCommit(() => emitToTeam(teamId, 'events:updated', { id: event.id }, { withScreens: true }));
     return { event, team };
   });
 }

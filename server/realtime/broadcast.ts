@@ -9,6 +9,9 @@ export function attachBroadcaster(server: Server | undefined) {
 
 export const eventRoom = (eventId: string) => `event:${eventId}`;
 export const teamRoom = (teamId: string) => `team:${teamId}`;
+export const screenRoom = (screenId: string) => `screen:${screenId}`;
+// A team's pit screens, apart from its tablets' team room: team-wide news reaches a screen only when asked.
+export const teamScreensRoom = (teamId: string) => `screens:${teamId}`;
 
 /**
  * Tells every tablet on an event that something changed (`area:verb`, e.g. `field:progressed`).
@@ -19,14 +22,23 @@ export function emitToEvent(eventId: string, name: string, payload: object) {
   io?.to(eventRoom(eventId)).emit(name, payload);
 }
 
-/** Same, for every tablet of a team (team-wide changes such as the current event). */
-export function emitToTeam(teamId: string, name: string, payload: object) {
-  io?.to(teamRoom(teamId)).emit(name, payload);
+/**
+ * Same, for every tablet of a team (team-wide changes such as the current event). `withScreens`
+ * also tells the team's pit screens: only for news a screen shows (the event), never people.
+ */
+export function emitToTeam(teamId: string, name: string, payload: object, { withScreens = false } = {}) {
+  io?.to(withScreens ? [teamRoom(teamId), teamScreensRoom(teamId)] : teamRoom(teamId)).emit(name, payload);
 }
 
 /** The team's current event changed: its connected sockets follow it to the new event's room. */
 export function moveTeamToEvent(teamId: string, fromEventId: string | null, toEventId: string) {
   if (!io) return;
-  if (fromEventId) io.in(teamRoom(teamId)).socketsLeave(eventRoom(fromEventId));
-  io.in(teamRoom(teamId)).socketsJoin(eventRoom(toEventId));
+  const rooms = [teamRoom(teamId), teamScreensRoom(teamId)];
+  if (fromEventId) io.in(rooms).socketsLeave(eventRoom(fromEventId));
+  io.in(rooms).socketsJoin(eventRoom(toEventId));
+}
+
+/** A pit screen was revoked: its open sockets are dropped now (the token no longer reconnects). */
+export function disconnectScreen(screenId: string) {
+  io?.in(screenRoom(screenId)).disconnectSockets(true);
 }

@@ -14,6 +14,7 @@ import { RequireCapability } from './require-capability';
 import { NotFound, RouteError } from './route-error';
 import { BoardRoute } from './routes/board-route';
 import { ScheduleRoute } from './routes/schedule-route';
+import { ScreenRoute } from './routes/screen-route';
 import { TeamRoute } from './routes/team-route';
 
 /** A page only members whose roles grant the capability may open. */
@@ -41,6 +42,13 @@ export function createAppRouter(queryClient: QueryClient) {
   const starting = <Loading label="Opening Pitwright" />;
 
   return createBrowserRouter([
+    {
+      // A TV in the pit: no session, no navigation; its token is checked by the server.
+      path: '/screen/:token',
+      element: <ScreenRoute />,
+      errorElement: <RouteError />,
+      hydrateFallbackElement: starting,
+    },
     {
       path: '/sign-in',
       loader: signInLoader,

@@ -26,6 +26,15 @@ describe('can(roles, capability)', () => {
     }
   }
 
+  it('lets only admin manage pit screens (a screen link opens the board to anyone holding it)', () => {
+    expect(can(['admin'], 'screens:manage')).toBe(true);
+    expect(can(['lead'], 'screens:manage')).toBe(false);
+    expect(can(['crew'], 'screens:manage')).toBe(false);
+    expect(can(['battery'], 'screens:manage')).toBe(false);
+    expect(can(['safety'], 'screens:manage')).toBe(false);
+    expect(can(['viewer'], 'screens:manage')).toBe(false);
+  });
+
   it('lets only admin and safety read incidents (reports can name minors)', () => {
     const readers = ROLES.filter((role) => can([role], 'incidents:read'));
     expect(readers).toEqual(['admin', 'safety']);

@@ -6,7 +6,7 @@ import { StatusTag } from '../../../components/ui/status-tag';
 import { formatZonedTime } from '../../../lib/dates';
 import { allianceWord, formatMinutes, matchName } from '../../../lib/match-labels';
 import { useServerNow } from '../../../lib/server-clock';
-import { Countdown } from './countdown';
+import { Countdown } from '../../../components/ui/countdown';
 
 /** What the card needs of the matches list: the three seats of each alliance. */
 export interface MatchTeams {

@@ -11,6 +11,7 @@ import { useMembers } from '../api/get-members';
 import { useTeam } from '../api/get-team';
 import { AddMemberForm } from './add-member-form';
 import { MemberCard } from './member-card';
+import { PitScreensCard } from './pit-screens-card';
 import { TemporaryPasswordDialog } from './temporary-password-dialog';
 
 // Active people first, then by name, so the list reads like a roll call.
@@ -24,6 +25,7 @@ export function TeamPage() {
   const members = useMembers();
   const { membership } = useViewer();
   const canManage = useCan('members:manage');
+  const canManageScreens = useCan('screens:manage');
   const [adding, setAdding] = useState(false);
   const [added, setAdded] = useState<CreatedMemberJson | null>(null);
 
@@ -87,6 +89,8 @@ export function TeamPage() {
           </ul>
         )}
       </section>
+
+      {canManageScreens && <PitScreensCard />}
 
       <TemporaryPasswordDialog member={added} onClose={() => setAdded(null)} />
     </>

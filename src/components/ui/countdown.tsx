@@ -1,4 +1,4 @@
-import { formatDuration } from '../../../lib/match-labels';
+import { formatDuration } from '../../lib/match-labels';
 
 /** "in 12:04" before the instant, "4:10 ago" after it; tabular so the digits stand still. */
 export function Countdown({ target, now }: { target: string; now: Date }) {
