@@ -96,7 +96,9 @@ async function send<T>(method: Method, path: string, options: RequestOptions, is
   // Signing in is the one write made before there is a session, hence before there is a token.
   const needsCsrf = method !== 'GET' && !(method === 'POST' && path === '/api/session');
   const headers: Record<string, string> = { accept: 'application/json' };
-  if (options.body !== undefined) headers['content-type'] = 'application/json';
+  // A FormData body (a file upload) sets its own multipart content type, boundary included.
+  const isForm = options.body instanceof FormData;
+  if (options.body !== undefined && !isForm) headers['content-type'] = 'application/json';
   const token = needsCsrf ? hooks.csrfToken() : undefined;
   if (token) headers['x-csrf-token'] = token;
 
@@ -105,7 +107,7 @@ async function send<T>(method: Method, path: string, options: RequestOptions, is
     response = await fetch(path, {
       method,
       headers,
-      body: options.body === undefined ? undefined : JSON.stringify(options.body),
+      body: options.body === undefined ? undefined : isForm ? (options.body as FormData) : JSON.stringify(options.body),
       credentials: 'same-origin',
       signal: options.signal,
     });

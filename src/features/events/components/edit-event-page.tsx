@@ -1,6 +1,6 @@
 import { useState } from 'react';
 import { useNavigate, useParams } from 'react-router';
-import type { EventJson } from '@shared/schemas/events';
+import type { EventJson, EventSettingsJson } from '@shared/schemas/events';
 import { Card } from '../../../components/ui/card';
 import { ErrorNotice } from '../../../components/ui/error-notice';
 import { Loading } from '../../../components/ui/loading';
@@ -9,6 +9,7 @@ import { useEvent } from '../api/get-event';
 import { staleEvent, useUpdateEvent } from '../api/update-event';
 import { EventForm, formValuesOf, type EventFields, type EventFormValues } from './event-form';
 import { StaleEventNotice } from './stale-event-notice';
+import { timingChanges, timingValuesOf } from './timing-settings-values';
 
 /** Only the fields the user changed from the version they started with, so a save overwrites nothing else. */
 function changesFrom(base: EventJson, fields: EventFields): Partial<EventFields> {
@@ -24,13 +25,16 @@ function EditEventForm({ event }: { event: EventJson }) {
   const update = useUpdateEvent();
   const [base, setBase] = useState(event);
   const [formKey, setFormKey] = useState(0);
-  const [mine, setMine] = useState<{ fields: EventFields; values: EventFormValues } | null>(null);
+  const [mine, setMine] = useState<{ fields: EventFields; values: EventFormValues; settings?: EventSettingsJson } | null>(null);
   const theirs = staleEvent(update.error);
 
-  function save(fields: EventFields, version: number) {
+  function save(fields: EventFields, version: number, settings?: EventSettingsJson) {
     const changes = changesFrom(base, fields);
-    if (Object.keys(changes).length === 0) return navigate('/events');
-    update.mutate({ id: event.id, ...changes, version }, { onSuccess: () => navigate('/events') });
+    // Sent only when one changed: a save of the name must not rewrite timing another admin just set.
+    const settingsChanges = settings && timingChanges(base.settings, settings);
+    if (Object.keys(changes).length === 0 && !settingsChanges) return navigate('/events');
+    const body = { id: event.id, ...changes, ...(settingsChanges && { settings: settingsChanges }), version };
+    update.mutate(body, { onSuccess: () => navigate('/events') });
   }
 
   function takeTheirs(latest: EventJson) {
@@ -44,12 +48,13 @@ function EditEventForm({ event }: { event: EventJson }) {
     <EventForm
       key={formKey}
       initialValues={formValuesOf(base)}
+      timing={timingValuesOf(base.settings)}
       submitLabel="Save changes"
       pending={update.isPending}
       saveError={theirs ? null : update.error}
-      onSubmit={(fields, values) => {
-        setMine({ fields, values });
-        save(fields, base.version);
+      onSubmit={(fields, values, settings) => {
+        setMine({ fields, values, settings });
+        save(fields, base.version, settings);
       }}
       notice={
         theirs &&
@@ -58,7 +63,7 @@ function EditEventForm({ event }: { event: EventJson }) {
             theirs={theirs}
             mine={mine.values}
             pending={update.isPending}
-            onKeepMine={() => save(mine.fields, theirs.version)}
+            onKeepMine={() => save(mine.fields, theirs.version, mine.settings)}
             onTakeTheirs={() => takeTheirs(theirs)}
           />
         )

@@ -1,11 +1,13 @@
 import { useState, type FormEvent, type ReactNode } from 'react';
-import { createEventSchema, type EventJson } from '@shared/schemas/events';
+import { createEventSchema, type EventJson, type EventSettingsJson } from '@shared/schemas/events';
 import { Button, LinkButton } from '../../../components/ui/button';
 import { Checkbox } from '../../../components/ui/checkbox';
 import { ErrorNotice } from '../../../components/ui/error-notice';
 import { TextField } from '../../../components/ui/field';
 import { mergeFieldErrors, parseForm, type FieldErrors } from '../../../lib/form-errors';
 import { TimeZoneSelect } from './time-zone-select';
+import { TimingSettingsFields } from './timing-settings-fields';
+import { readTiming, serverTimingErrors, type TimingValues } from './timing-settings-values';
 
 /** What the inputs hold: strings, as typed, so that nothing the user entered is lost or reformatted. */
 export interface EventFormValues {
@@ -31,14 +33,19 @@ interface EventFormProps {
   pending: boolean;
   /** The failed save, for the server's message and its per-field messages; null while `notice` explains it. */
   saveError: unknown;
-  onSubmit: (fields: EventFields, values: EventFormValues) => void;
+  /** Shown only when editing: the timing settings, saved in the same request as the rest. */
+  timing?: TimingValues;
+  /** `settings` is the whole checked set when `timing` is given; the caller picks what changed. */
+  onSubmit: (fields: EventFields, values: EventFormValues, settings?: EventSettingsJson) => void;
   /** Rendered above the fields, e.g. the notice that someone else saved first. */
   notice?: ReactNode;
 }
 
-export function EventForm({ initialValues, makeCurrent, submitLabel, pending, saveError, onSubmit, notice }: EventFormProps) {
+export function EventForm({ initialValues, makeCurrent, timing, submitLabel, pending, saveError, onSubmit, notice }: EventFormProps) {
   const [values, setValues] = useState(initialValues);
+  const [timingValues, setTimingValues] = useState(timing);
   const [clientErrors, setClientErrors] = useState<FieldErrors>({});
+  const [timingErrors, setTimingErrors] = useState<FieldErrors>({});
   const errors = mergeFieldErrors(clientErrors, saveError);
 
   const set = (field: keyof EventFormValues) => (value: string) => setValues((old) => ({ ...old, [field]: value }));
@@ -47,6 +54,9 @@ export function EventForm({ initialValues, makeCurrent, submitLabel, pending, sa
     event.preventDefault();
     const typedNumber = values.teamNumber.trim() === '' ? undefined : Number(values.teamNumber);
     const parsed = parseForm(createEventSchema, { ...values, teamNumber: typedNumber });
+    // Both parts are checked on every submit, so all the messages show at once.
+    const settings = timingValues && readTiming(timingValues);
+    setTimingErrors(settings && !settings.ok ? settings.errors : {});
     if (!parsed.ok) {
       // The schema's "YYYY-MM-DD" hint is for API callers; a date picker left empty needs plainer words.
       if (!values.startDate) parsed.errors.startDate = 'Choose the first day';
@@ -55,8 +65,9 @@ export function EventForm({ initialValues, makeCurrent, submitLabel, pending, sa
       return;
     }
     setClientErrors({});
+    if (settings && !settings.ok) return;
     const { name, venue, timeZone, startDate, endDate, teamNumber } = parsed.data;
-    onSubmit({ name, venue, timeZone, startDate, endDate, teamNumber }, values);
+    onSubmit({ name, venue, timeZone, startDate, endDate, teamNumber }, values, settings?.data);
   }
 
   return (
@@ -103,6 +114,9 @@ export function EventForm({ initialValues, makeCurrent, submitLabel, pending, sa
         onChange={(event) => set('teamNumber')(event.target.value)}
         error={errors.teamNumber}
       />
+      {timingValues && (
+        <TimingSettingsFields values={timingValues} errors={{ ...timingErrors, ...serverTimingErrors(saveError) }} onChange={setTimingValues} />
+      )}
       {makeCurrent && (
         <Checkbox
           label="Make it our current event (the board shows it)"

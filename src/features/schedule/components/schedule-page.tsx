@@ -1,5 +1,5 @@
-import { useEffect, useMemo, useRef } from 'react';
-import { zoneAbbreviation } from '@shared/domain/event-clock';
+import { useEffect, useMemo, useRef, useState } from 'react';
+import { localDate, zoneAbbreviation } from '@shared/domain/event-clock';
 import { ErrorNotice } from '../../../components/ui/error-notice';
 import { ClockIcon, ScheduleIcon } from '../../../components/ui/icons';
 import { Loading } from '../../../components/ui/loading';
@@ -12,20 +12,27 @@ import { useTimeline } from '../api/get-timeline';
 import { useMarkFieldProgress } from '../api/mark-field-progress';
 import { useUndoFieldProgress } from '../api/undo-field-progress';
 import { FieldControls } from './field-controls';
+import { EditMatchButton, EditMatchForm } from './match-editor';
 import { nextOnField } from './next-on-field';
 import { ScheduleRow } from './schedule-row';
+import { ScheduleTools } from './schedule-tools';
 
 /** What the schedule needs of the current event (the route passes it in). */
 export interface ScheduleEvent {
   id: string;
   timeZone: string;
   teamNumber: number;
+  /** The first day (YYYY-MM-DD): where "Add a match" starts before any match exists. */
+  startDate?: string;
 }
 
 export function SchedulePage({ event }: { event: ScheduleEvent }) {
   const timeline = useTimeline(event.id);
   const matches = useMatches(event.id);
   const canMarkField = useCan('field:progress');
+  const canEdit = useCan('schedule:edit');
+  // One match open for editing at a time: a second form would only invite losing the first.
+  const [editingId, setEditingId] = useState<string | null>(null);
   const mark = useMarkFieldProgress(event.id);
   const undo = useUndoFieldProgress(event.id);
 
@@ -60,6 +67,11 @@ export function SchedulePage({ event }: { event: ScheduleEvent }) {
   const { cycleSeconds, delaySeconds } = timeline.data;
   const rows = timeline.data.matches;
   const headerZone = zoneAbbreviation(rows[0]?.scheduledStart ?? new Date(), event.timeZone);
+  // New matches are mostly added at the end of the schedule (a late playoff): start on that day.
+  const lastStart = rows.at(-1)?.scheduledStart;
+  const defaultDate = lastStart ? localDate(lastStart, event.timeZone) : (event.startDate ?? localDate(new Date(), event.timeZone));
+  const tools = (startOpen: boolean) =>
+    canEdit && <ScheduleTools eventId={event.id} timeZone={event.timeZone} zoneLabel={headerZone} defaultDate={defaultDate} startOpen={startOpen} />;
 
   if (rows.length === 0) {
     return (
@@ -70,6 +82,7 @@ export function SchedulePage({ event }: { event: ScheduleEvent }) {
           <h2 className="text-2xl font-bold">No matches yet — a lead imports the schedule</h2>
           <p className="max-w-prose text-lg text-ink-muted">Once it is in, every match shows here with its projected start.</p>
         </section>
+        <div className="mt-5">{tools(true)}</div>
       </>
     );
   }
@@ -91,6 +104,7 @@ export function SchedulePage({ event }: { event: ScheduleEvent }) {
           </span>
         }
       />
+      {tools(false)}
       {/* With every match marked there is no next row to hold the controls; undo stays reachable. */}
       {canMarkField && !next && <FieldControls next={null} mark={mark} undo={undo} />}
       {matches.isError && (
@@ -112,8 +126,16 @@ export function SchedulePage({ event }: { event: ScheduleEvent }) {
             timeZone={event.timeZone}
             headerZone={headerZone}
             teamNumber={event.teamNumber}
+            action={
+              canEdit && teamsById.has(match.id) && editingId !== match.id && (
+                <EditMatchButton match={teamsById.get(match.id)!} onClick={() => setEditingId(match.id)} />
+              )
+            }
           >
             {canMarkField && match.id === next?.id && <FieldControls next={next} mark={mark} undo={undo} />}
+            {editingId === match.id && teamsById.has(match.id) && (
+              <EditMatchForm eventId={event.id} match={teamsById.get(match.id)!} timeZone={event.timeZone} zoneLabel={headerZone} onDone={() => setEditingId(null)} />
+            )}
           </ScheduleRow>
         ))}
       </ol>

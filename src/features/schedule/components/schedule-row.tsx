@@ -16,7 +16,9 @@ interface ScheduleRowProps {
   timeZone: string;
   headerZone: string;
   teamNumber: number;
-  /** The field controls, on the next match's row for those who may mark it. */
+  /** Beside the match's name: "Edit" for those who may change the schedule. */
+  action?: ReactNode;
+  /** The field controls, on the next match's row for those who may mark it; the open edit form. */
   children?: ReactNode;
 }
 
@@ -29,7 +31,7 @@ function Time({ label, children, strong = false }: { label: string; children: Re
   );
 }
 
-export function ScheduleRow({ match, teams, ourMatch, isNext, timeZone, headerZone, teamNumber, children }: ScheduleRowProps) {
+export function ScheduleRow({ match, teams, ourMatch, isNext, timeZone, headerZone, teamNumber, action, children }: ScheduleRowProps) {
   const started = match.startedAt !== null;
   const frame = match.ours ? 'border-accent bg-accent-soft' : isNext ? 'border-line-strong bg-surface' : 'border-transparent bg-surface';
   return (
@@ -39,7 +41,10 @@ export function ScheduleRow({ match, teams, ourMatch, isNext, timeZone, headerZo
     >
       <div className="flex flex-wrap items-start justify-between gap-x-6 gap-y-2">
         <div className="flex min-w-0 flex-col gap-1.5">
-          <h3 className="text-xl font-bold">{matchName(match.level, match.number)}</h3>
+          <div className="flex flex-wrap items-center gap-x-3 gap-y-1">
+            <h3 className="text-xl font-bold">{matchName(match.level, match.number)}</h3>
+            {action}
+          </div>
           <div className="flex flex-wrap gap-2">
             {match.ours && (
               <span className="inline-flex items-center gap-1.5 rounded-full bg-accent px-3 py-1 text-sm font-bold text-on-accent">
