@@ -14,11 +14,15 @@ export function markFieldProgress({ eventId, ...body }: MarkFieldProgressInput):
   return api.post<MatchJson>(`/api/events/${encodeURIComponent(eventId)}/field-progress`, body);
 }
 
-/** Marks a match as on the field now; the whole schedule's projection moves with it. */
+/**
+ * Marks a match as on the field, now or at a time the lead gives (a tap that came late); the
+ * whole schedule's projection moves with it.
+ */
 export function useMarkFieldProgress(eventId: string) {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: (matchId: string) => markFieldProgress({ eventId, matchId, startedAt: serverNow().toISOString() }),
+    mutationFn: ({ matchId, startedAt }: { matchId: string; startedAt?: Date }) =>
+      markFieldProgress({ eventId, matchId, startedAt: (startedAt ?? serverNow()).toISOString() }),
     // Awaited, so the button stays busy until the screen shows the new next match: a second tap
     // meanwhile would otherwise mark the same match again.
     // On failure too: a 404 or 409 usually means another tablet changed the field first.

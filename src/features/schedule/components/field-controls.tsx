@@ -4,11 +4,13 @@ import { ErrorNotice } from '../../../components/ui/error-notice';
 import { CheckIcon, FieldIcon, UndoIcon } from '../../../components/ui/icons';
 import { isApiError } from '../../../lib/api-client';
 import { matchName } from '../../../lib/match-labels';
+import { EarlierStart } from './earlier-start';
 import type { useMarkFieldProgress } from '../api/mark-field-progress';
 import type { useUndoFieldProgress } from '../api/undo-field-progress';
 
 interface FieldControlsProps {
   next: TimelineMatchJson | null;
+  timeZone: string;
   // Owned by the page: the controls move to the next row after each mark, and their messages
   // ("Marked Qualification 6") must survive the move.
   mark: ReturnType<typeof useMarkFieldProgress>;
@@ -19,13 +21,13 @@ interface FieldControlsProps {
  * The lead's field controls, shown on the row of the next match (which the page opens at):
  * tapping when a match starts is what keeps every projection honest.
  */
-export function FieldControls({ next, mark, undo }: FieldControlsProps) {
+export function FieldControls({ next, timeZone, mark, undo }: FieldControlsProps) {
   const busy = mark.isPending || undo.isPending;
 
   // Each action clears the other's outcome, so the panel only ever reports the latest tap.
-  const onMark = (matchId: string) => {
+  const onMark = (variables: { matchId: string; startedAt?: Date }) => {
     undo.reset();
-    mark.mutate(matchId);
+    mark.mutate(variables);
   };
   const onUndo = () => {
     mark.reset();
@@ -42,7 +44,7 @@ export function FieldControls({ next, mark, undo }: FieldControlsProps) {
             icon={<FieldIcon className="size-7" />}
             pending={mark.isPending}
             disabled={busy}
-            onClick={() => onMark(next.id)}
+            onClick={() => onMark({ matchId: next.id })}
           >
             {matchName(next.level, next.number)} is on the field now
           </Button>
@@ -53,6 +55,7 @@ export function FieldControls({ next, mark, undo }: FieldControlsProps) {
           Undo last mark
         </Button>
       </div>
+      {next && <EarlierStart match={next} timeZone={timeZone} disabled={busy} onMark={onMark} />}
       <div aria-live="polite">
         {mark.isSuccess && (
           <p className="flex items-center gap-2 font-semibold text-ok">

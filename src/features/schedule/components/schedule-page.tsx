@@ -106,7 +106,7 @@ export function SchedulePage({ event }: { event: ScheduleEvent }) {
       />
       {tools(false)}
       {/* With every match marked there is no next row to hold the controls; undo stays reachable. */}
-      {canMarkField && !next && <FieldControls next={null} mark={mark} undo={undo} />}
+      {canMarkField && !next && <FieldControls next={null} timeZone={event.timeZone} mark={mark} undo={undo} />}
       {matches.isError && (
         <ErrorNotice
           title="Could not load the teams of each match"
@@ -132,7 +132,7 @@ export function SchedulePage({ event }: { event: ScheduleEvent }) {
               )
             }
           >
-            {canMarkField && match.id === next?.id && <FieldControls next={next} mark={mark} undo={undo} />}
+            {canMarkField && match.id === next?.id && <FieldControls next={next} timeZone={event.timeZone} mark={mark} undo={undo} />}
             {editingId === match.id && teamsById.has(match.id) && (
               <EditMatchForm eventId={event.id} match={teamsById.get(match.id)!} timeZone={event.timeZone} zoneLabel={headerZone} onDone={() => setEditingId(null)} />
             )}
