@@ -2,6 +2,7 @@ import session from 'express-session';
 import connectSessionSequelize from 'connect-session-sequelize';
 import { Op, type Sequelize } from 'sequelize';
 import { SessionRecord } from '../models';
+import { disconnectSessions } from '../realtime/broadcast';
 
 const SequelizeStore = connectSessionSequelize(session.Store);
 
@@ -36,14 +37,14 @@ export class SessionStore extends SequelizeStore {
   }
 }
 
-/** Ends every session of one user (password change elsewhere), or those working in one team (deactivation). */
+/**
+ * Ends every session of one user (password change elsewhere), or those working in one team
+ * (deactivation), and closes their live sockets.
+ */
 export async function endSessionsOf(userId: string, { except, teamId }: { except?: string; teamId?: string } = {}) {
   const where = { userId, ...(except ? { sid: { [Op.ne]: except } } : {}) };
-  if (!teamId) {
-    await SessionRecord.destroy({ where });
-    return;
-  }
   const rows = await SessionRecord.findAll({ where, attributes: ['sid', 'data'] });
-  const sids = rows.filter((row) => JSON.parse(row.data).activeTeamId === teamId).map((row) => row.sid);
+  const sids = rows.filter((row) => !teamId || JSON.parse(row.data).activeTeamId === teamId).map((row) => row.sid);
   if (sids.length) await SessionRecord.destroy({ where: { sid: sids } });
+  disconnectSessions(sids);
 }

@@ -1,6 +1,9 @@
 import type { FieldProgressInput } from '../../shared/schemas/schedule';
 import { inTransaction } from '../db/transaction';
-import { notFound } from '../errors';
+import { HttpError, notFound } from '../errors';
+
+// Tablet clocks drift; a minute ahead of the server is still "now".
+const FUTURE_TOLERANCE_MS = 60_000;
 import { Event, FieldMark, Match } from '../models';
 import { presentMatchWithStart } from '../presenters/match';
 import { emitToEvent } from '../realtime/broadcast';
@@ -12,8 +15,13 @@ export async function recordFieldMark(teamId: string, eventId: string, userId: s
     const event = await Event.ofTeam(teamId, eventId, { transaction, lock: true });
     const match = await Match.findOne({ where: { id: matchId, eventId: event.id }, transaction });
     if (!match) throw notFound('Match');
+    const at = startedAt ? new Date(startedAt) : new Date();
+    // A start in the future (a typo, or a late tap read on the wrong day) would skew every projection.
+    if (at.getTime() > Date.now() + FUTURE_TOLERANCE_MS) {
+      throw new HttpError(400, 'invalid', 'Check these fields: startedAt', { fields: { startedAt: 'Must not be in the future' } });
+    }
     await FieldMark.create(
-      { eventId: event.id, matchId: match.id, startedAt: startedAt ? new Date(startedAt) : new Date(), markedById: userId },
+      { eventId: event.id, matchId: match.id, startedAt: at, markedById: userId },
       { transaction },
     );
     transaction.afterCommit(() => emitToEvent(event.id, 'field:progressed', { eventId: event.id, matchId: match.id }));

@@ -1,6 +1,6 @@
 import type { UpdateMatchInput } from '../../shared/schemas/schedule';
 import { inTransaction } from '../db/transaction';
-import { notFound, stale } from '../errors';
+import { HttpError, notFound, stale } from '../errors';
 import { Event, Match } from '../models';
 import { presentMatchWithStart } from '../presenters/match';
 import { emitToEvent } from '../realtime/broadcast';
@@ -16,6 +16,12 @@ export async function updateMatch(teamId: string, matchId: string, { version, ..
     const match = await Match.findByPk(matchId, { transaction, lock: transaction.LOCK.UPDATE, rejectOnEmpty: true });
     if (version !== undefined && version !== match.version) throw stale(await presentMatchWithStart(match, transaction));
     match.set(matchColumns(fields));
+    // The body may carry one alliance only: the check must see the stored other one too.
+    const seats = [match.red1, match.red2, match.red3, match.blue1, match.blue2, match.blue3];
+    if (new Set(seats).size < seats.length) {
+      const field = fields.red ? 'red' : 'blue';
+      throw new HttpError(400, 'invalid', `Check these fields: ${field}`, { fields: { [field]: 'A team can only be in one seat of a match' } });
+    }
     if (match.changed('level') || match.changed('number')) await assertSlotFree(match.eventId, match.level, match.number, match.id, transaction);
     if (match.changed()) {
       await match.save({ transaction });

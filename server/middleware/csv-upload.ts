@@ -11,7 +11,8 @@ const isCsv = (file: Express.Multer.File) => /\.csv$/i.test(file.originalname) |
 
 const upload = multer({
   storage: multer.memoryStorage(),
-  limits: { fileSize: SCHEDULE_FILE_MAX_BYTES, files: 1 },
+  // The form carries the file and nothing else: no room for large or many text fields.
+  limits: { fileSize: SCHEDULE_FILE_MAX_BYTES, files: 1, fields: 4, fieldSize: 1024, parts: 5 },
   fileFilter: (_req, file, accept) => (isCsv(file) ? accept(null, true) : accept(fileInvalid('Send a CSV file (.csv)'))),
 }).single('file');
 

@@ -42,3 +42,10 @@ export function moveTeamToEvent(teamId: string, fromEventId: string | null, toEv
 export function disconnectScreen(screenId: string) {
   io?.in(screenRoom(screenId)).disconnectSockets(true);
 }
+
+export const sessionRoom = (sid: string) => `session:${sid}`;
+
+/** Closes the sockets of ended sessions: they must hear nothing more of the team. */
+export function disconnectSessions(sids: readonly string[]) {
+  for (const sid of sids) io?.in(sessionRoom(sid)).disconnectSockets(true);
+}

@@ -3,7 +3,7 @@ import type { Request } from 'express';
 import { Server, type Socket } from 'socket.io';
 import type { createApp } from '../app';
 import { ScreenToken, Team } from '../models';
-import { attachBroadcaster, eventRoom, screenRoom, teamRoom, teamScreensRoom } from './broadcast';
+import { attachBroadcaster, eventRoom, screenRoom, sessionRoom, teamRoom, teamScreensRoom } from './broadcast';
 
 type Middleware = (req: IncomingMessage, res: ServerResponse, next: (error?: unknown) => void) => void;
 
@@ -64,7 +64,8 @@ export function attachRealtime(httpServer: HttpServer, { sessionMiddleware, pass
     const memberships = req.user?.memberships ?? [];
     const membership = memberships.find((m) => m.teamId === req.session?.activeTeamId) ?? memberships[0];
     if (!membership) return next(new Error('unauthenticated'));
-    void socket.join(teamRoom(membership.teamId));
+    // Its session's room: a sign-out, a team switch or a deactivation closes this socket too.
+    void socket.join([teamRoom(membership.teamId), sessionRoom(req.sessionID)]);
     if (membership.team?.currentEventId) void socket.join(eventRoom(membership.team.currentEventId));
     next();
   });

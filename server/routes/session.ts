@@ -9,6 +9,7 @@ import { passwordChangeLimiter, signInLimiters } from '../auth/failure-limits';
 import { HttpError, notFound } from '../errors';
 import type { User } from '../models';
 import { presentSession } from '../presenters/session';
+import { disconnectSessions } from '../realtime/broadcast';
 
 type Passport = ReturnType<typeof createPassport>;
 
@@ -52,10 +53,13 @@ export function sessionRouter({ passport, csrf, cookieName }: { passport: Passpo
     const membership = auth.memberships.find((m) => m.teamId === teamId);
     if (!membership) throw notFound('Team');
     req.session.activeTeamId = teamId;
+    // Its sockets sit in the old team's rooms; the client opens a new one for the new team.
+    disconnectSessions([req.sessionID]);
     res.json(presentSession({ ...auth, membership }, csrf.generateToken(req)));
   });
 
   router.delete('/', (req, res, next) => {
+    disconnectSessions([req.sessionID]);
     req.logout((logoutError) => {
       if (logoutError) return next(logoutError);
       req.session.destroy((destroyError) => {

@@ -11,10 +11,15 @@ export const MATCH_NUMBER_MAX = 999;
 // `toISOString` writes. A bare local time is refused; it would be read in someone's own zone.
 const INSTANT = /^(\d{4})-(\d{2})-(\d{2})T\d{2}:\d{2}(?::\d{2}(?:\.\d{1,3})?)?(?:Z|[+-]\d{2}:\d{2})$/i;
 
-/** True for an ISO 8601 instant with an offset on a real calendar day. */
+// Far outside any season is a typo, and beyond year 9999 the database cannot store it at all.
+const EARLIEST_MS = Date.UTC(2000, 0, 1);
+const LATEST_MS = Date.UTC(2100, 0, 1);
+
+/** True for an ISO 8601 instant with an offset on a real calendar day, between 2000 and 2100. */
 export function isInstant(value: string): boolean {
   const parts = INSTANT.exec(value);
-  if (!parts || Number.isNaN(Date.parse(value))) return false;
+  const ms = Date.parse(value);
+  if (!parts || Number.isNaN(ms) || ms < EARLIEST_MS || ms >= LATEST_MS) return false;
   // Date.parse rolls 2027-02-30 over into March; the calendar day must exist as written.
   const [year, month, day] = parts.slice(1, 4).map(Number);
   const date = new Date(Date.UTC(year, month - 1, day));

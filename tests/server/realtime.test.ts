@@ -85,3 +85,20 @@ it('a field mark by the lead reaches a crew tablet on the event, with the event 
   expect(marked.status).toBe(201);
   expect(await arrived).toEqual({ eventId: team.event.id, matchId: match.body.id });
 });
+
+it("signing out, or being deactivated, closes that session's socket at once", async () => {
+  const own = await makeTeam();
+  const ownAdmin = await signIn(app, own.emails.admin, PASSWORD);
+  const crew = await signIn(app, own.emails.crew, PASSWORD);
+  const viewerOwn = await signIn(app, own.emails.viewer, PASSWORD);
+  const crewSocket = (await open(await cookieOf(crew))).socket;
+  const viewerSocket = (await open(await cookieOf(viewerOwn))).socket;
+
+  const crewGone = nextEvent(crewSocket, 'disconnect');
+  expect((await crew.delete('/api/session')).status).toBe(204);
+  expect(await crewGone).toBe('io server disconnect');
+
+  const viewerGone = nextEvent(viewerSocket, 'disconnect');
+  expect((await ownAdmin.patch(`/api/team/members/${own.memberships.viewer.id}`, { active: false })).status).toBe(200);
+  expect(await viewerGone).toBe('io server disconnect');
+});

@@ -65,7 +65,7 @@ describe('POST …/matches/import: success', () => {
     const own = await chicagoTeam();
     const first = (await importCsv(own.admin, own.event.id, csv(...FIRST))).body.matches;
     const q1 = first.find((m: { level: string; number: number }) => m.level === 'qualification' && m.number === 1);
-    const marked = await own.admin.post(`/api/events/${own.event.id}/field-progress`, { matchId: q1.id, startedAt: '2027-03-05T15:02:00Z' });
+    const marked = await own.admin.post(`/api/events/${own.event.id}/field-progress`, { matchId: q1.id, startedAt: '2026-11-20T15:02:00Z' });
     expect(marked.status).toBe(201);
 
     const revised = csv(
@@ -81,7 +81,7 @@ describe('POST …/matches/import: success', () => {
     expect(answer.body).toMatchObject({ created: 1, updated: 1, unchanged: 1 });
     expect(answer.body.matches).toHaveLength(4); // practice 1 stays, though not in the file
     const after = answer.body.matches.find((m: { id: string }) => m.id === q1.id);
-    expect(after).toEqual({ ...q1, scheduledStart: '2027-03-05T15:05:00.000Z', startedAt: '2027-03-05T15:02:00.000Z', version: 1 });
+    expect(after).toEqual({ ...q1, scheduledStart: '2027-03-05T15:05:00.000Z', startedAt: '2026-11-20T15:02:00.000Z', version: 1 });
     expect(preview.body.matches.find((m: { id: string }) => m.id === q1.id)).toEqual(after);
     expect(await FieldMark.count({ where: { matchId: q1.id, undoneAt: null } })).toBe(1);
   });

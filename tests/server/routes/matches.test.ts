@@ -208,6 +208,15 @@ describe('PATCH /api/matches/:id', () => {
     expect((await own.admin.get(own.url)).body).toEqual([first.body]);
   });
 
+  it('refuses an edit of one alliance that puts a team of the stored other alliance in twice', async () => {
+    const own = await ownTeam();
+    const match = (await own.admin.post(own.url, matchBody())).body;
+    const answer = await own.admin.patch(`/api/matches/${match.id}`, { red: [21004, 21007, 21008] });
+    expect(answer.status).toBe(400);
+    expect(answer.body).toEqual(invalid({ red: 'A team can only be in one seat of a match' }));
+    expect((await own.admin.get(own.url)).body).toEqual([match]);
+  });
+
   it('answers 409 match_exists when moving onto a taken level and number', async () => {
     const own = await ownTeam();
     await own.admin.post(own.url, matchBody({ number: 1 }));

@@ -20,7 +20,10 @@ export function EarlierStart({ match, timeZone, disabled, onMark }: EarlierStart
 
   function submit() {
     try {
-      const startedAt = localTimeToInstant(localDate(serverNow(), timeZone), time, timeZone);
+      const now = serverNow();
+      let startedAt = localTimeToInstant(localDate(now, timeZone), time, timeZone);
+      // Just after midnight, 23:58 means yesterday evening, not tonight.
+      if (startedAt > now) startedAt = localTimeToInstant(localDate(new Date(now.getTime() - 24 * 3_600_000), timeZone), time, timeZone);
       setProblem(null);
       onMark({ matchId: match.id, startedAt });
     } catch {
