@@ -52,3 +52,27 @@ export function formatMinutes(minutes: number): string {
   if (abs < 60) return `${sign}${abs} min`;
   return `${sign}${Math.floor(abs / 60)} h ${abs % 60} min`;
 }
+
+/** Under this long before the queue call, the board and the pit screen say so loudly. */
+export const QUEUE_WARNING_MS = 5 * 60_000;
+
+/** True when the queue call is under five minutes away, or already past. */
+export const isQueueSoon = (queueAt: string, now: Date) => Date.parse(queueAt) - now.getTime() < QUEUE_WARNING_MS;
+
+/**
+ * Who is with us and who against, from the match's alliances (unknown while they load), with
+ * the words both views label them by.
+ */
+export function lineupOf(
+  alliance: Alliance,
+  teams: { red: readonly number[]; blue: readonly number[] } | undefined,
+  teamNumber: number,
+) {
+  const ours = teams ? (alliance === 'red' ? teams.red : teams.blue) : undefined;
+  return {
+    word: allianceWord(alliance),
+    opponentWord: allianceWord(alliance === 'red' ? 'blue' : 'red'),
+    partners: ours?.filter((team) => team !== teamNumber),
+    opponents: teams ? (alliance === 'red' ? teams.blue : teams.red) : undefined,
+  };
+}

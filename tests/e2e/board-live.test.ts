@@ -1,7 +1,7 @@
 import path from 'node:path';
 import { beforeAll, expect, it } from 'vitest';
 import { signIn, type SignedIn } from '../support/app';
-import { browserHarness, SCREENSHOT_DIR } from '../support/browser';
+import { browserHarness, SCREENSHOT_DIR, fillSignIn } from '../support/browser';
 import { makeTeam, PASSWORD } from '../support/factories';
 import { matchBody } from '../support/schedule';
 
@@ -26,10 +26,7 @@ it("the board's projected start moves when the lead marks the field on another d
   const context = await harness.browser.newContext({ viewport: { width: 800, height: 1280 }, hasTouch: true });
   try {
     const page = await context.newPage();
-    await page.goto(`${harness.baseUrl}/sign-in`);
-    await page.getByLabel('E-mail').fill(team.emails.crew);
-    await page.getByLabel('Password', { exact: true }).fill(PASSWORD);
-    await page.getByRole('button', { name: 'Sign in' }).click();
+    await fillSignIn(page, harness.baseUrl, team.emails.crew, PASSWORD);
     await page.getByText('Live', { exact: true }).waitFor();
     await page.getByText('Qualification 2').first().waitFor();
     const projectedAt = page.getByRole('article').getByText(/^at /).nth(1);

@@ -1,6 +1,6 @@
 import { beforeAll, expect, it } from 'vitest';
 import { signIn } from '../support/app';
-import { browserHarness } from '../support/browser';
+import { browserHarness, fillSignIn } from '../support/browser';
 import { makeTeam, PASSWORD } from '../support/factories';
 
 const harness = browserHarness();
@@ -13,10 +13,7 @@ it('a tablet shows the live state and picks up a change made on another device w
   const context = await harness.browser.newContext({ viewport: { width: 800, height: 1280 }, hasTouch: true });
   try {
     const page = await context.newPage();
-    await page.goto(`${harness.baseUrl}/sign-in`);
-    await page.getByLabel('E-mail').fill(team.emails.crew);
-    await page.getByLabel('Password', { exact: true }).fill(PASSWORD);
-    await page.getByRole('button', { name: 'Sign in' }).click();
+    await fillSignIn(page, harness.baseUrl, team.emails.crew, PASSWORD);
     await page.getByText('Live', { exact: true }).waitFor();
     await page.getByTestId('shell-current-event').getByText(team.event.name).waitFor();
 

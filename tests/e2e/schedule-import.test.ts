@@ -1,6 +1,6 @@
 import path from 'node:path';
 import { beforeAll, expect, it } from 'vitest';
-import { browserHarness, SCREENSHOT_DIR } from '../support/browser';
+import { browserHarness, SCREENSHOT_DIR, fillSignIn } from '../support/browser';
 import { makeTeam, PASSWORD } from '../support/factories';
 import { csv } from '../support/schedule';
 
@@ -15,10 +15,7 @@ it('a lead previews a schedule file, applies it and sees its matches', async () 
   const context = await harness.browser.newContext({ viewport: { width: 800, height: 1280 }, hasTouch: true });
   try {
     const page = await context.newPage();
-    await page.goto(`${harness.baseUrl}/sign-in`);
-    await page.getByLabel('E-mail').fill(team.emails.lead);
-    await page.getByLabel('Password', { exact: true }).fill(PASSWORD);
-    await page.getByRole('button', { name: 'Sign in' }).click();
+    await fillSignIn(page, harness.baseUrl, team.emails.lead, PASSWORD);
     await page.getByText('Live', { exact: true }).waitFor();
     await page.goto(`${harness.baseUrl}/schedule`);
 

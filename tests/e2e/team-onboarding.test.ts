@@ -1,7 +1,7 @@
 import path from 'node:path';
 import { beforeAll, expect, it } from 'vitest';
 import type { Page } from 'playwright-core';
-import { browserHarness, SCREENSHOT_DIR } from '../support/browser';
+import { browserHarness, SCREENSHOT_DIR, fillSignIn } from '../support/browser';
 import { makeTeam, PASSWORD, uniqueEmail } from '../support/factories';
 
 const harness = browserHarness();
@@ -11,10 +11,7 @@ beforeAll(async () => {
 });
 
 async function signInAs(page: Page, email: string, password: string) {
-  await page.goto(`${harness.baseUrl}/sign-in`);
-  await page.getByLabel('E-mail').fill(email);
-  await page.getByLabel('Password', { exact: true }).fill(password);
-  await page.getByRole('button', { name: 'Sign in' }).click();
+  await fillSignIn(page, harness.baseUrl, email, password);
   await page.getByRole('button', { name: 'Sign out' }).waitFor();
 }
 

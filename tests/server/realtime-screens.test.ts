@@ -1,12 +1,11 @@
 import { beforeAll, expect, it } from 'vitest';
-import { io as connect, type Socket } from 'socket.io-client';
 import { signIn, type SignedIn } from '../support/app';
 import { makeTeam, PASSWORD } from '../support/factories';
-import { realtimeHarness } from '../support/realtime';
+import { nextEvent, realtimeHarness } from '../support/realtime';
 import { matchBody } from '../support/schedule';
 
 // Pit screens sign their socket in with the screen token instead of a session cookie.
-const { app, harness } = realtimeHarness();
+const { app, openScreen } = realtimeHarness();
 let team: Awaited<ReturnType<typeof makeTeam>>;
 let admin: SignedIn;
 let lead: SignedIn;
@@ -16,23 +15,6 @@ beforeAll(async () => {
   lead = await signIn(app, team.emails.lead, PASSWORD);
 });
 
-/** A socket as the pit screen opens it, without any cookie; resolves once connected or refused. */
-function openScreen(screenToken: unknown) {
-  const socket = connect(harness.baseUrl, { transports: ['websocket'], auth: { screenToken }, reconnection: false });
-  harness.sockets.push(socket);
-  return new Promise<{ socket: Socket; error?: Error }>((resolve) => {
-    socket.once('connect', () => resolve({ socket }));
-    socket.once('connect_error', (error) => resolve({ socket, error }));
-  });
-}
-const nextEvent = (socket: Socket, name: string) =>
-  new Promise<unknown>((resolve, reject) => {
-    const timer = setTimeout(() => reject(new Error(`no ${name} arrived`)), 5_000);
-    socket.once(name, (payload: unknown) => {
-      clearTimeout(timer);
-      resolve(payload);
-    });
-  });
 const addScreen = async () => {
   const answer = await admin.post('/api/team/screens', { name: 'Pit TV' });
   expect(answer.status).toBe(201);

@@ -1,8 +1,7 @@
 import { beforeAll, expect, it } from 'vitest';
-import type { Socket } from 'socket.io-client';
 import { signIn, type SignedIn } from '../support/app';
 import { makeTeam, PASSWORD } from '../support/factories';
-import { realtimeHarness } from '../support/realtime';
+import { cookieOf, nextEvent, realtimeHarness } from '../support/realtime';
 import { matchBody } from '../support/schedule';
 import { emitToEvent } from '../../server/realtime/broadcast';
 
@@ -15,19 +14,6 @@ beforeAll(async () => {
   admin = await signIn(app, team.emails.admin, PASSWORD);
   viewer = await signIn(app, team.emails.viewer, PASSWORD);
 });
-
-const cookieOf = async (client: SignedIn) => {
-  const answer = await client.get('/api/session');
-  return ([] as string[]).concat(answer.headers['set-cookie'] ?? []).map((cookie) => cookie.split(';')[0]).join('; ');
-};
-const nextEvent = (socket: Socket, name: string) =>
-  new Promise<unknown>((resolve, reject) => {
-    const timer = setTimeout(() => reject(new Error(`no ${name} arrived`)), 5_000);
-    socket.once(name, (payload: unknown) => {
-      clearTimeout(timer);
-      resolve(payload);
-    });
-  });
 
 it('refuses a socket without a session', async () => {
   const { error } = await open();

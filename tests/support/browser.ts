@@ -2,7 +2,7 @@ import fs from 'node:fs';
 import path from 'node:path';
 import type { AddressInfo } from 'node:net';
 import { afterAll, beforeAll } from 'vitest';
-import { chromium, type Browser } from 'playwright-core';
+import { chromium, type Browser, type Page } from 'playwright-core';
 import { attachRealtime } from '../../server/realtime/io';
 import { testApp } from './app';
 
@@ -34,4 +34,12 @@ export function browserHarness() {
     });
   });
   return harness;
+}
+
+/** Fills in and sends the sign-in form, as a person at the tablet would. */
+export async function fillSignIn(page: Page, baseUrl: string, email: string, password: string) {
+  await page.goto(`${baseUrl}/sign-in`);
+  await page.getByLabel('E-mail').fill(email);
+  await page.getByLabel('Password', { exact: true }).fill(password);
+  await page.getByRole('button', { name: 'Sign in' }).click();
 }

@@ -4,7 +4,7 @@ import { allianceSolidClass } from '../../../components/ui/alliance';
 import { AlertIcon, QueueIcon } from '../../../components/ui/icons';
 import { StatusTag } from '../../../components/ui/status-tag';
 import { formatZonedTime } from '../../../lib/dates';
-import { allianceWord, formatMinutes, matchName } from '../../../lib/match-labels';
+import { formatMinutes, isQueueSoon, lineupOf, matchName } from '../../../lib/match-labels';
 import { useServerNow } from '../../../lib/server-clock';
 import { Countdown } from '../../../components/ui/countdown';
 
@@ -16,7 +16,6 @@ export interface MatchTeams {
 }
 
 // Five minutes is about two field cycles: enough to stop work, grab the robot and walk.
-const QUEUE_WARNING_MS = 5 * 60_000;
 
 function Teams({ label, teams }: { label: string; teams: readonly number[] | undefined }) {
   return (
@@ -56,10 +55,8 @@ export function NextMatchCard({ match, teams, teamNumber, timeZone }: {
   timeZone: string;
 }) {
   const now = useServerNow(1000);
-  const queueSoon = Date.parse(match.queueAt) - now.getTime() < QUEUE_WARNING_MS;
-  const ourSide = teams ? (match.alliance === 'red' ? teams.red : teams.blue) : undefined;
-  const theirSide = teams ? (match.alliance === 'red' ? teams.blue : teams.red) : undefined;
-  const word = allianceWord(match.alliance);
+  const queueSoon = isQueueSoon(match.queueAt, now);
+  const { word, opponentWord, partners, opponents } = lineupOf(match.alliance, teams, teamNumber);
 
   return (
     <article aria-labelledby="next-match-title" className="overflow-hidden rounded-3xl border border-line bg-surface shadow-sm">
@@ -82,8 +79,8 @@ export function NextMatchCard({ match, teams, teamNumber, timeZone }: {
             </h2>
           </div>
           <dl className="grid gap-3 min-[480px]:grid-cols-2">
-            <Teams label={`With (${word})`} teams={ourSide?.filter((team) => team !== teamNumber)} />
-            <Teams label={`Against (${word === 'RED' ? 'BLUE' : 'RED'})`} teams={theirSide} />
+            <Teams label={`With (${word})`} teams={partners} />
+            <Teams label={`Against (${opponentWord})`} teams={opponents} />
           </dl>
         </div>
       </div>

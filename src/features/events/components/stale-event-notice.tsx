@@ -1,6 +1,5 @@
 import type { EventJson } from '@shared/schemas/events';
-import { Button } from '../../../components/ui/button';
-import { AlertIcon } from '../../../components/ui/icons';
+import { StaleNotice } from '../../../components/ui/stale-notice';
 import { formatDateRange, readableZone } from '../../../lib/dates';
 import type { EventFormValues } from './event-form';
 
@@ -33,11 +32,13 @@ export function StaleEventNotice({ theirs, mine, pending, onKeepMine, onTakeThei
     (field) => String(theirs[field]) !== mine[field].trim(),
   );
   return (
-    <div role="alert" className="flex flex-col gap-3 rounded-xl border-2 border-warning bg-warning-soft p-4 text-ink">
-      <p className="flex items-center gap-2 text-lg font-bold">
-        <AlertIcon className="size-6 text-warning" /> Someone else changed this event
-      </p>
-      <p>Their version was saved while you were editing. Your input is still in the form below.</p>
+    <StaleNotice
+      what="this event"
+      intro="Their version was saved while you were editing. Your input is still in the form below."
+      pending={pending}
+      onKeepMine={onKeepMine}
+      onTakeTheirs={onTakeTheirs}
+    >
       {fields.length > 0 ? (
         <dl className="grid grid-cols-[auto_1fr] gap-x-4 gap-y-1 rounded-lg bg-surface p-3">
           {fields.map((field) => (
@@ -50,14 +51,6 @@ export function StaleEventNotice({ theirs, mine, pending, onKeepMine, onTakeThei
       ) : (
         <p>Their values match what you typed.</p>
       )}
-      <div className="flex flex-wrap gap-3">
-        <Button pending={pending} onClick={onKeepMine}>
-          Save mine over theirs
-        </Button>
-        <Button variant="secondary" onClick={onTakeTheirs}>
-          Use their version
-        </Button>
-      </div>
-    </div>
+    </StaleNotice>
   );
 }

@@ -4,10 +4,9 @@ import { allianceSolidClass } from '../../../components/ui/alliance';
 import { Countdown } from '../../../components/ui/countdown';
 import { AlertIcon, QueueIcon } from '../../../components/ui/icons';
 import { formatZonedTime } from '../../../lib/dates';
-import { allianceWord, formatMinutes, matchName } from '../../../lib/match-labels';
+import { formatMinutes, isQueueSoon, lineupOf, matchName } from '../../../lib/match-labels';
 
 // The same threshold as the board: about two field cycles to stop work and walk the robot over.
-const QUEUE_WARNING_MS = 5 * 60_000;
 
 function Clock({ label, at, now, timeZone, loud }: { label: string; at: string; now: Date; timeZone: string; loud: boolean }) {
   return (
@@ -38,10 +37,8 @@ export function ScreenNextMatch({ match, teams, teamNumber, timeZone, now }: {
   timeZone: string;
   now: Date;
 }) {
-  const queueSoon = Date.parse(match.queueAt) - now.getTime() < QUEUE_WARNING_MS;
-  const word = allianceWord(match.alliance);
-  const ourSide = teams ? (match.alliance === 'red' ? teams.red : teams.blue) : undefined;
-  const theirSide = teams ? (match.alliance === 'red' ? teams.blue : teams.red) : undefined;
+  const queueSoon = isQueueSoon(match.queueAt, now);
+  const { word, opponentWord, partners, opponents } = lineupOf(match.alliance, teams, teamNumber);
   return (
     <section aria-labelledby="screen-next-title" className="flex flex-col gap-5">
       {queueSoon && (
@@ -62,8 +59,8 @@ export function ScreenNextMatch({ match, teams, teamNumber, timeZone, now }: {
             </h2>
           </div>
           <dl className="grid grid-cols-2 gap-6">
-            <Teams label={`With (${word})`} teams={ourSide?.filter((team) => team !== teamNumber)} />
-            <Teams label={`Against (${word === 'RED' ? 'BLUE' : 'RED'})`} teams={theirSide} />
+            <Teams label={`With (${word})`} teams={partners} />
+            <Teams label={`Against (${opponentWord})`} teams={opponents} />
           </dl>
           <p className="flex items-center gap-4 text-3xl">
             <span className="font-semibold text-neutral-300">Turnaround before it:</span>
