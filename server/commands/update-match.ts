@@ -1,4 +1,4 @@
-import type { UpdateMatchInput } from '../../shared/schemas/schedule';
+import { repeatedSeats, type UpdateMatchInput } from '../../shared/schemas/schedule';
 import { inTransaction } from '../db/transaction';
 import { HttpError, notFound, stale } from '../errors';
 import { Event, Match } from '../models';
@@ -17,8 +17,7 @@ export async function updateMatch(teamId: string, matchId: string, { version, ..
     if (version !== undefined && version !== match.version) throw stale(await presentMatchWithStart(match, transaction));
     match.set(matchColumns(fields));
     // The body may carry one alliance only: the check must see the stored other one too.
-    const seats = [match.red1, match.red2, match.red3, match.blue1, match.blue2, match.blue3];
-    if (new Set(seats).size < seats.length) {
+    if (repeatedSeats({ red: [match.red1, match.red2, match.red3], blue: [match.blue1, match.blue2, match.blue3] }).length > 0) {
       const field = fields.red ? 'red' : 'blue';
       throw new HttpError(400, 'invalid', `Check these fields: ${field}`, { fields: { [field]: 'A team can only be in one seat of a match' } });
     }

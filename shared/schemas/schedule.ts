@@ -64,13 +64,22 @@ const matchFields = z.object({
 });
 
 /** A team plays at most once per match; named on the alliance where it appears the second time. */
-function oneSeatPerTeam(match: { red?: readonly number[]; blue?: readonly number[] }, ctx: z.RefinementCtx) {
+/** Every seat a team takes a second time (red seats first), with the alliance it is on. */
+export function repeatedSeats(match: { red?: readonly number[]; blue?: readonly number[] }) {
   const seen = new Set<number>();
+  const repeats: { side: 'red' | 'blue'; team: number }[] = [];
   for (const side of ['red', 'blue'] as const) {
     for (const team of match[side] ?? []) {
-      if (seen.has(team)) ctx.addIssue({ code: 'custom', path: [side], message: `Team ${team} is in this match twice` });
+      if (seen.has(team)) repeats.push({ side, team });
       seen.add(team);
     }
+  }
+  return repeats;
+}
+
+function oneSeatPerTeam(match: { red?: readonly number[]; blue?: readonly number[] }, ctx: z.RefinementCtx) {
+  for (const { side, team } of repeatedSeats(match)) {
+    ctx.addIssue({ code: 'custom', path: [side], message: `Team ${team} is in this match twice` });
   }
 }
 
