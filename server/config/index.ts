@@ -23,6 +23,8 @@ const envSchema = z.object({
       if (value === undefined || value === '' || value === 'false') return undefined;
       return /^\d+$/.test(value) ? Number(value) : value;
     }),
+  // Where the built client is; tests that build their own copy point here.
+  CLIENT_DIR: z.string().default('dist'),
 });
 
 export type Config = ReturnType<typeof loadConfig>;
@@ -44,6 +46,6 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env) {
     sessionSecret: vars.SESSION_SECRET,
     sessionIdleMs: vars.SESSION_IDLE_HOURS * 3_600_000,
     trustProxy: vars.TRUST_PROXY,
-    clientDir: path.resolve('dist'),
+    clientDir: path.resolve(vars.CLIENT_DIR),
   };
 }

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import type { ReadinessJson } from '../domain/readiness';
 import type { TimelineJson } from '../domain/timeline';
 import { clientId } from './common';
 import type { MatchJson } from './schedule';
@@ -51,4 +52,6 @@ export interface ScreenBoardJson {
   event: ScreenEventJson | null;
   timeline: TimelineJson | null;
   matches: MatchJson[] | null;
+  /** Of our next match; null without an event or a match of ours still to play. */
+  readiness: ReadinessJson | null;
 }

@@ -3,6 +3,8 @@ import type { QueryClient } from '@tanstack/react-query';
 import type { Capability } from '@shared/roles';
 import { createBrowserRouter, redirect, type LoaderFunctionArgs } from 'react-router';
 import { Loading } from '../components/ui/loading';
+import { EditTemplatePage, NewTemplatePage } from '../features/checks/components/templates/template-editor-page';
+import { TemplatesPage } from '../features/checks/components/templates/templates-page';
 import { EditEventPage } from '../features/events/components/edit-event-page';
 import { EventsPage } from '../features/events/components/events-page';
 import { NewEventPage } from '../features/events/components/new-event-page';
@@ -13,6 +15,7 @@ import { AppShell } from './app-shell';
 import { RequireCapability } from './require-capability';
 import { NotFound, RouteError } from './route-error';
 import { BoardRoute } from './routes/board-route';
+import { ChecksRoute, RunRoute } from './routes/checks-route';
 import { ScheduleRoute } from './routes/schedule-route';
 import { ScreenRoute } from './routes/screen-route';
 import { TeamRoute } from './routes/team-route';
@@ -74,6 +77,26 @@ export function createAppRouter(queryClient: QueryClient) {
             {
               path: 'schedule',
               element: guarded('board:read', <ScheduleRoute />),
+            },
+            {
+              path: 'checks',
+              element: guarded('board:read', <ChecksRoute />),
+            },
+            {
+              path: 'checks/runs/:runId',
+              element: guarded('board:read', <RunRoute />),
+            },
+            {
+              path: 'checks/templates',
+              element: guarded('board:read', <TemplatesPage />),
+            },
+            {
+              path: 'checks/templates/new',
+              element: guarded('templates:edit', <NewTemplatePage />),
+            },
+            {
+              path: 'checks/templates/:templateId',
+              element: guarded('board:read', <EditTemplatePage />),
             },
             {
               path: 'events',
