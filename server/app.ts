@@ -11,6 +11,8 @@ import { requireAuth } from './auth/require-auth';
 import { SessionStore } from './auth/session-store';
 import { apiNotFound, errorHandler } from './middleware/error-handler';
 import { initModels } from './models';
+import { checklistRunsRouter, eventChecklistRunsRouter } from './routes/checklist-runs';
+import { checklistTemplatesRouter } from './routes/checklist-templates';
 import { eventsRouter } from './routes/events';
 import { fieldProgressRouter } from './routes/field-progress';
 import { healthRouter } from './routes/health';
@@ -67,8 +69,11 @@ export function createApp({ config, sequelize }: { config: Config; sequelize: Se
   api.use('/events/:eventId/matches', requireAuth, eventMatchesRouter());
   api.use('/events/:eventId/field-progress', requireAuth, fieldProgressRouter());
   api.use('/events/:eventId/timeline', requireAuth, timelineRouter());
+  api.use('/events/:eventId/checklist-runs', requireAuth, eventChecklistRunsRouter());
   api.use('/events', requireAuth, eventsRouter());
   api.use('/matches', requireAuth, matchesRouter());
+  api.use('/checklist-templates', requireAuth, checklistTemplatesRouter());
+  api.use('/checklist-runs', requireAuth, checklistRunsRouter());
   api.use(apiNotFound);
   app.use('/api', api);
 

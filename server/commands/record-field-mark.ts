@@ -1,14 +1,18 @@
 import type { FieldProgressInput } from '../../shared/schemas/schedule';
 import { inTransaction } from '../db/transaction';
 import { HttpError, notFound } from '../errors';
-
-// Tablet clocks drift; a minute ahead of the server is still "now".
-const FUTURE_TOLERANCE_MS = 60_000;
 import { Event, FieldMark, Match } from '../models';
 import { presentMatchWithStart } from '../presenters/match';
 import { emitToEvent } from '../realtime/broadcast';
+import { startPreMatchRuns } from './start-pre-match-runs';
 
-/** Records that a match of the event went on the field (now, unless `startedAt` says when), and who said so. */
+// Tablet clocks drift; a minute ahead of the server is still "now".
+const FUTURE_TOLERANCE_MS = 60_000;
+
+/**
+ * Records that a match of the event went on the field (now, unless `startedAt` says when), and who
+ * said so. When it is one of ours, the pre-match checks of our next match start with it.
+ */
 export async function recordFieldMark(teamId: string, eventId: string, userId: string, { matchId, startedAt }: FieldProgressInput) {
   return inTransaction(async (transaction) => {
     // The event's row lock puts marks and undos of one event in one order.
@@ -24,6 +28,7 @@ export async function recordFieldMark(teamId: string, eventId: string, userId: s
       { eventId: event.id, matchId: match.id, startedAt: at, markedById: userId },
       { transaction },
     );
+    await startPreMatchRuns(event, match.id, userId, transaction);
     transaction.afterCommit(() => emitToEvent(event.id, 'field:progressed', { eventId: event.id, matchId: match.id }));
     return presentMatchWithStart(match, transaction);
   });

@@ -3,12 +3,14 @@ import type { QueryInterface, Sequelize } from 'sequelize';
 import * as foundation from './migrations/20261201-0001-foundation';
 import * as schedule from './migrations/20261202-0001-schedule';
 import * as screenTokens from './migrations/20261202-0002-screen-tokens';
+import * as checklists from './migrations/20261203-0001-checklists';
 
 // Listed by hand, in order: a glob would change meaning with the build layout.
 const MIGRATIONS = [
   { name: '20261201-0001-foundation', ...foundation },
   { name: '20261202-0001-schedule', ...schedule },
   { name: '20261202-0002-screen-tokens', ...screenTokens },
+  { name: '20261203-0001-checklists', ...checklists },
 ];
 
 /** The migrator for one database; `up()` applies what is missing, `down()` steps back. */

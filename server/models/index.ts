@@ -1,4 +1,9 @@
 import type { Sequelize } from 'sequelize';
+import { ChecklistItemState, decodeMarkValue, encodeMarkValue } from './checklist-item-state';
+import { ChecklistMark } from './checklist-mark';
+import { ChecklistRun } from './checklist-run';
+import { ChecklistTemplate } from './checklist-template';
+import { ChecklistTemplateVersion } from './checklist-template-version';
 import { Event } from './event';
 import { FieldMark } from './field-mark';
 import { Match } from './match';
@@ -9,7 +14,8 @@ import { Team } from './team';
 import { User } from './user';
 
 export { Event, FieldMark, Match, Membership, ScreenToken, SessionRecord, Team, User };
-export { hashScreenToken, newScreenToken };
+export { ChecklistItemState, ChecklistMark, ChecklistRun, ChecklistTemplate, ChecklistTemplateVersion };
+export { decodeMarkValue, encodeMarkValue, hashScreenToken, newScreenToken };
 
 let boundTo: Sequelize | undefined;
 
@@ -18,7 +24,9 @@ export function initModels(sequelize: Sequelize) {
   if (boundTo === sequelize) return;
   if (boundTo) throw new Error('Models are already bound to another database connection');
   boundTo = sequelize;
-  for (const model of [Team, User, Membership, Event, SessionRecord, Match, FieldMark, ScreenToken]) model.initModel(sequelize);
+  const models = [Team, User, Membership, Event, SessionRecord, Match, FieldMark, ScreenToken];
+  const checklistModels = [ChecklistTemplate, ChecklistTemplateVersion, ChecklistRun, ChecklistItemState, ChecklistMark];
+  for (const model of [...models, ...checklistModels]) model.initModel(sequelize);
   Membership.belongsTo(Team, { foreignKey: 'teamId', as: 'team' });
   Membership.belongsTo(User, { foreignKey: 'userId', as: 'user' });
   Team.hasMany(Membership, { foreignKey: 'teamId', as: 'memberships' });
@@ -29,4 +37,9 @@ export function initModels(sequelize: Sequelize) {
   FieldMark.belongsTo(Event, { foreignKey: 'eventId', as: 'event' });
   FieldMark.belongsTo(User, { foreignKey: 'markedById', as: 'markedBy' });
   ScreenToken.belongsTo(Team, { foreignKey: 'teamId', as: 'team' });
+  ChecklistTemplate.belongsTo(Team, { foreignKey: 'teamId', as: 'team' });
+  ChecklistTemplateVersion.belongsTo(ChecklistTemplate, { foreignKey: 'templateId', as: 'template' });
+  ChecklistRun.belongsTo(Event, { foreignKey: 'eventId', as: 'event' });
+  ChecklistRun.belongsTo(ChecklistTemplate, { foreignKey: 'templateId', as: 'template' });
+  ChecklistRun.belongsTo(ChecklistTemplateVersion, { foreignKey: 'templateVersionId', as: 'templateVersion' });
 }

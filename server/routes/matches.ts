@@ -1,6 +1,7 @@
 import { Router } from 'express';
 import { parseScheduleCsv } from '../../shared/domain/schedule-csv';
-import { createMatchSchema, eventParams, importQuery, matchParams, updateMatchSchema } from '../../shared/schemas/schedule';
+import { readinessParams } from '../../shared/schemas/checks';
+import { createMatchSchema, eventParams, importQuery, matchParams, timelineQuery, updateMatchSchema } from '../../shared/schemas/schedule';
 import { authOf } from '../auth/require-auth';
 import { createMatch } from '../commands/create-match';
 import { importMatches } from '../commands/import-matches';
@@ -10,6 +11,7 @@ import { readCsvUpload } from '../middleware/csv-upload';
 import { Event } from '../models';
 import { authorize } from '../policies/authorize';
 import { presentSchedule } from '../presenters/match';
+import { readinessOf } from '../readiness/readiness-of';
 
 /** The schedule of one event: mounted at /api/events/:eventId/matches. */
 export function eventMatchesRouter() {
@@ -46,6 +48,16 @@ export function eventMatchesRouter() {
       throw new HttpError(400, 'invalid_file', message, { rows: parsed.errors });
     }
     res.json(await importMatches(auth.membership.teamId, event.id, parsed.rows, { dryRun }));
+  });
+
+  router.get('/:matchId/readiness', async (req, res) => {
+    const auth = authOf(req);
+    authorize(auth, 'board:read');
+    const { eventId, matchId } = readinessParams.parse(req.params);
+    // `at` as on the timeline: "as of" a moment, which also lets tests pin the clock.
+    const { at } = timelineQuery.parse(req.query);
+    const event = await Event.ofTeam(auth.membership.teamId, eventId);
+    res.json(await readinessOf(event, matchId, at ? new Date(at) : new Date()));
   });
 
   return router;

@@ -12,6 +12,7 @@ import { authorize } from '../policies/authorize';
 import { timelineSettingsOf } from '../presenters/event';
 import { presentSchedule } from '../presenters/match';
 import { presentScreen, presentScreenEvent } from '../presenters/screen';
+import { readinessOf } from '../readiness/readiness-of';
 
 const screenParams = z.object({ id: z.uuid({ message: 'Must be a UUID' }) });
 const tokenParams = z.object({ token: z.string() });
@@ -56,7 +57,8 @@ const SCREEN_READS_PER_MINUTE = 240;
 
 /**
  * What a pit screen shows, read with its token and no session: mounted at /api/screen before
- * the session middleware. Nothing about people: the team, the current event and its schedule.
+ * the session middleware. Nothing about people: the team, the current event, its schedule and
+ * the readiness of our next match.
  */
 export function screenBoardRouter() {
   const router = Router();
@@ -79,11 +81,16 @@ export function screenBoardRouter() {
     const team = await Team.findByPk(screen.teamId, { rejectOnEmpty: true });
     const event = team.currentEventId ? await Event.findOne({ where: { id: team.currentEventId, teamId: team.id } }) : null;
     const matches = event ? await presentSchedule(event.id) : null;
+    const now = new Date();
+    const timeline = event && matches ? computeTimeline(matches, timelineSettingsOf(event), now) : null;
+    const next = timeline?.ourMatches[0];
     const body: ScreenBoardJson = {
       team: { number: team.number, name: team.name },
       event: event ? presentScreenEvent(event) : null,
-      timeline: event && matches ? computeTimeline(matches, timelineSettingsOf(event), new Date()) : null,
+      timeline,
       matches,
+      // Readiness reasons name items and a lead's sign-off reason, never who marked what.
+      readiness: event && next ? await readinessOf(event, next.matchId, now) : null,
     };
     // The token is in the URL: no shared cache may keep the answer.
     res.set('Cache-Control', 'no-store').json(body);

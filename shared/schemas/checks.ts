@@ -10,7 +10,7 @@ import {
 } from '../domain/checklist';
 import type { Alliance, MatchLevel } from '../domain/timeline';
 import { ROLES } from '../roles';
-import { clientId, versionField } from './common';
+import { clientId, requiredOr, versionField } from './common';
 
 export const TEMPLATE_NAME_MAX = 80;
 export const ITEM_LABEL_MAX = 120;
@@ -19,7 +19,7 @@ export const TEMPLATE_ITEMS_MAX = 100;
 export const ITEM_OPTIONS_MAX = 12;
 export const SIGN_OFF_REASON_MIN = 5;
 
-const uuid = z.uuid({ message: 'Must be a UUID' });
+const uuid = z.uuid(requiredOr('Must be a UUID'));
 const text = (max: number, empty: string) =>
   z
     .string({ message: empty })
@@ -42,8 +42,8 @@ const itemSchema = z
     id: z.string().min(1).max(40).optional(),
     label: text(ITEM_LABEL_MAX, 'Give the item a label'),
     help: optionalText(ITEM_HELP_MAX),
-    kind: z.enum(ITEM_KINDS, { message: 'Use tick, number, choice or text' }),
-    required: z.boolean({ message: 'true or false' }),
+    kind: z.enum(ITEM_KINDS, requiredOr('Use tick, number, choice or text')),
+    required: z.boolean(requiredOr('true or false')),
     min: limit,
     max: limit,
     unit: optionalText(12),
@@ -78,7 +78,7 @@ const itemSchema = z
 export type ItemInput = z.output<typeof itemSchema>;
 
 const itemsField = z
-  .array(itemSchema, { message: 'A list of items' })
+  .array(itemSchema, requiredOr('A list of items'))
   .min(1, { message: 'A checklist needs at least one item' })
   .max(TEMPLATE_ITEMS_MAX, { message: `At most ${TEMPLATE_ITEMS_MAX} items` })
   .superRefine((items, ctx) => {
@@ -88,7 +88,7 @@ const itemsField = z
 
 const templateFields = z.object({
   name: text(TEMPLATE_NAME_MAX, 'Give the checklist a name'),
-  phase: z.enum(CHECKLIST_PHASES, { message: `One of: ${CHECKLIST_PHASES.join(', ')}` }),
+  phase: z.enum(CHECKLIST_PHASES, requiredOr(`One of: ${CHECKLIST_PHASES.join(', ')}`)),
   items: itemsField,
 });
 
@@ -113,6 +113,8 @@ export type CreateRunInput = z.output<typeof createRunSchema>;
 export const runParams = z.object({ runId: uuid });
 export const runItemParams = z.object({ runId: uuid, itemId: z.string().min(1).max(40) });
 export const runListQuery = z.object({ matchId: uuid.optional() });
+export const eventRunsParams = z.object({ eventId: uuid });
+export const readinessParams = z.object({ eventId: uuid, matchId: uuid });
 
 /** The value is checked against the item's kind by the server, which knows the item. */
 export const markSchema = z

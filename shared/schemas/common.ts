@@ -1,6 +1,9 @@
 import { z } from 'zod';
 import './messages';
 
+/** A missing field says "Required" (see messages.ts); a wrong one says what to send instead. */
+export const requiredOr = (message: string) => ({ error: (issue: { input?: unknown }) => (issue.input === undefined ? 'Required' : message) });
+
 /** A client may choose a record's id so that resending a create cannot make a duplicate. */
 export const clientId = z.uuid({ message: 'Must be a UUID' });
 

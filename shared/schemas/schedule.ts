@@ -1,6 +1,6 @@
 import { z } from 'zod';
 import { MATCH_LEVELS, type MatchLevel } from '../domain/timeline';
-import { clientId, versionField } from './common';
+import { clientId, requiredOr, versionField } from './common';
 
 /** Largest schedule file the import accepts. */
 export const SCHEDULE_FILE_MAX_BYTES = 1024 * 1024;
@@ -26,8 +26,6 @@ export function isInstant(value: string): boolean {
   return date.getUTCFullYear() === year && date.getUTCMonth() === month - 1 && date.getUTCDate() === day;
 }
 
-// A missing field says "Required" (see messages.ts); a wrong one says what to send instead.
-const requiredOr = (message: string) => ({ error: (issue: { input?: unknown }) => (issue.input === undefined ? 'Required' : message) });
 
 export const INSTANT_MESSAGE = 'Use an ISO time with an offset, e.g. 2027-03-05T15:00:00Z';
 /** An instant in, its canonical ISO form (`…Z`, milliseconds) out. */
@@ -63,7 +61,6 @@ const matchFields = z.object({
   blue: alliance,
 });
 
-/** A team plays at most once per match; named on the alliance where it appears the second time. */
 /** Every seat a team takes a second time (red seats first), with the alliance it is on. */
 export function repeatedSeats(match: { red?: readonly number[]; blue?: readonly number[] }) {
   const seen = new Set<number>();

@@ -38,3 +38,9 @@ it('has the field partway through day one, running late, with the next match due
   // Match 21 was due 4 minutes ago: 20 cycles after a start 20 cycles and 4 minutes before now.
   expect(schedule[20].scheduledStart.toISOString()).toBe('2027-03-06T15:56:00.000Z');
 });
+
+it('has a match of ours played and the next one still to come, which the demo checklists use', () => {
+  const ours = schedule.filter((match) => [...match.red, ...match.blue].includes(28417));
+  expect(ours.filter((match) => match.startedAt !== null).at(-1)?.number).toBe(17);
+  expect(ours.find((match) => match.startedAt === null)?.number).toBe(24);
+});

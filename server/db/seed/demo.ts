@@ -1,8 +1,10 @@
 import { addDays, formatISO } from 'date-fns';
 import { TZDate } from '@date-fns/tz';
+import type { Transaction } from 'sequelize';
 import type { Role } from '../../../shared/roles';
 import { hashPassword } from '../../auth/passwords';
 import { Event, FieldMark, Match, Membership, Team, User } from '../../models';
+import { seedDemoChecklists, type DemoChecklistMatch } from './demo-checklists';
 import { demoSchedule } from './demo-schedule';
 import { inTransaction } from '../transaction';
 
@@ -24,9 +26,9 @@ export const DEMO_USERS: { role: Role; name: string }[] = [
 export const demoEmail = (role: Role) => `${role}@${DEMO_DOMAIN}`;
 
 /**
- * Seeds the invented demo team with one account per role and its event's qualification
- * schedule, the field partway through day one. Refuses in production, where well-known
- * passwords must never exist.
+ * Seeds the invented demo team with one account per role, its event's qualification schedule
+ * (the field partway through day one) and its checklists. Refuses in production, where
+ * well-known passwords must never exist.
  */
 export async function seedDemo({ env, now = new Date() }: { env: string; now?: Date }) {
   if (env === 'production') throw new Error('Refusing to seed demo accounts with NODE_ENV=production');
@@ -46,30 +48,41 @@ export async function seedDemo({ env, now = new Date() }: { env: string; now?: D
       { transaction },
     );
     await team.update({ currentEventId: event.id }, { transaction });
-    const users: Partial<Record<Role, User>> = {};
+    const users = {} as Record<Role, User>;
     for (const { role, name } of DEMO_USERS) {
       users[role] = await User.create({ email: demoEmail(role), name, passwordHash }, { transaction });
       await Membership.create({ teamId: team.id, userId: users[role].id, roles: [role] }, { transaction });
     }
-    for (const match of demoSchedule({ now, ourNumber: DEMO_TEAM.number })) {
-      const { id: matchId } = await Match.create(
-        {
-          eventId: event.id,
-          level: 'qualification',
-          number: match.number,
-          scheduledStart: match.scheduledStart,
-          red1: match.red[0],
-          red2: match.red[1],
-          red3: match.red[2],
-          blue1: match.blue[0],
-          blue2: match.blue[1],
-          blue3: match.blue[2],
-        },
-        { transaction },
-      );
-      if (match.startedAt) {
-        await FieldMark.create({ eventId: event.id, matchId, startedAt: match.startedAt, markedById: users.lead!.id }, { transaction });
-      }
-    }
+    const matches = await createDemoMatches({ eventId: event.id, ourNumber: DEMO_TEAM.number, markedById: users.lead.id, now }, transaction);
+    await seedDemoChecklists({ team, event, users, matches, now }, transaction);
   });
+}
+
+/** The demo schedule's matches and field marks for an event; answers them as the checklists read them. */
+export async function createDemoMatches(
+  { eventId, ourNumber, markedById, now }: { eventId: string; ourNumber: number; markedById: string; now: Date },
+  transaction: Transaction,
+): Promise<DemoChecklistMatch[]> {
+  const created: DemoChecklistMatch[] = [];
+  for (const match of demoSchedule({ now, ourNumber })) {
+    const { id } = await Match.create(
+      {
+        eventId,
+        level: 'qualification',
+        number: match.number,
+        scheduledStart: match.scheduledStart,
+        red1: match.red[0],
+        red2: match.red[1],
+        red3: match.red[2],
+        blue1: match.blue[0],
+        blue2: match.blue[1],
+        blue3: match.blue[2],
+      },
+      { transaction },
+    );
+    if (match.startedAt) await FieldMark.create({ eventId, matchId: id, startedAt: match.startedAt, markedById }, { transaction });
+    const alliance = match.red.includes(ourNumber) ? 'red' : match.blue.includes(ourNumber) ? 'blue' : null;
+    created.push({ id, scheduledStart: match.scheduledStart, startedAt: match.startedAt, alliance });
+  }
+  return created;
 }

@@ -165,7 +165,7 @@ describe('GET /api/screen/:token', () => {
     const screen = await addScreen(teamAdmin);
     const answer = await request(app).get(`/api/screen/${screen.token}`);
     expect(answer.status).toBe(200);
-    expect(answer.body).toEqual({ team: { number: team.team.number, name: team.team.name }, event: null, timeline: null, matches: null });
+    expect(answer.body).toEqual({ team: { number: team.team.number, name: team.team.name }, event: null, timeline: null, matches: null, readiness: null });
   });
 
   it('answers 404 for an unknown or malformed token', async () => {

@@ -1,0 +1,43 @@
+import { valueProblem, type MarkValue } from '../../shared/domain/checklist';
+import type { MarkInput } from '../../shared/schemas/checks';
+import { inTransaction } from '../db/transaction';
+import { HttpError, notFound } from '../errors';
+import { ChecklistItemState, ChecklistMark, ChecklistRun, ChecklistTemplateVersion, encodeMarkValue, User } from '../models';
+import { presentRunItem } from '../presenters/checklist';
+import { emitToEvent } from '../realtime/broadcast';
+
+/**
+ * Sets one item's current mark (null: un-marked) and appends it to the run's history. The state
+ * row is updated by its key alone: marks of other items of the run never wait for this one, and
+ * of two marks of the same item the later write wins whole (value, note, who and when).
+ */
+export async function writeMark(teamId: string, userId: string, runId: string, itemId: string, value: MarkValue | null, note: string | null) {
+  return inTransaction(async (transaction) => {
+    const run = await ChecklistRun.ofTeam(teamId, runId, { transaction });
+    const version = await ChecklistTemplateVersion.findByPk(run.templateVersionId, { transaction, rejectOnEmpty: true });
+    const item = version.items.find((candidate) => candidate.id === itemId);
+    if (!item) throw notFound('Item');
+    const problem = value === null ? null : valueProblem(item, value);
+    if (problem) throw new HttpError(400, 'invalid', 'Check these fields: value', { fields: { value: problem } });
+
+    const markedAt = new Date();
+    const stored = encodeMarkValue(value);
+    await ChecklistItemState.update(
+      value === null
+        ? { value: null, note: null, markedById: null, markedAt: null }
+        : { value: stored, note, markedById: userId, markedAt },
+      { where: { runId: run.id, itemId }, transaction },
+    );
+    await ChecklistMark.create({ runId: run.id, itemId, value: stored, note, markedById: userId, markedAt }, { transaction });
+    // Read back under the row lock the update holds: this is what was stored.
+    const state = await ChecklistItemState.findOne({ where: { runId: run.id, itemId }, transaction, rejectOnEmpty: true });
+    const user = await User.findByPk(userId, { attributes: ['id', 'name'], transaction, rejectOnEmpty: true });
+    // Ids only: the event room includes pit screens, which must never receive people's names.
+    transaction.afterCommit(() => emitToEvent(run.eventId, 'checks:marked', { eventId: run.eventId, runId: run.id, itemId }));
+    return presentRunItem(item, state, new Map([[user.id, { id: user.id, name: user.name }]]));
+  });
+}
+
+/** Marks an item with a value that fits its kind (a number out of limits is stored, and failed). */
+export const markItem = (teamId: string, userId: string, runId: string, itemId: string, { value, note }: MarkInput) =>
+  writeMark(teamId, userId, runId, itemId, value, note);
