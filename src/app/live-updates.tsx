@@ -8,11 +8,17 @@ export type LiveStatus = 'live' | 'reconnecting' | 'offline';
 
 // Server events (`area:verb`) → the query keys they make stale. Events carry ids only; the
 // queries refetch what each screen shows.
+// Readiness reads the checks and the schedule (alliance, queue time): changes to either make it stale.
+const CHECK_RUNS = [['checklist-runs'], ['checklist-run'], ['readiness']];
 const STALE_AFTER: Record<string, string[][]> = {
-  'events:updated': [['events'], ['team']],
-  'matches:imported': [['matches'], ['timeline']],
-  'matches:updated': [['matches'], ['timeline']],
-  'field:progressed': [['matches'], ['timeline']],
+  'events:updated': [['events'], ['team'], ['readiness']],
+  'matches:imported': [['matches'], ['timeline'], ['readiness']],
+  'matches:updated': [['matches'], ['timeline'], ['readiness']],
+  'field:progressed': [['matches'], ['timeline'], ['readiness']],
+  'checks:templates-changed': [['checklist-templates'], ['checklist-template']],
+  'checks:run-started': CHECK_RUNS,
+  'checks:marked': CHECK_RUNS,
+  'checks:signed-off': CHECK_RUNS,
 };
 
 /**

@@ -3,18 +3,27 @@ import { ErrorNotice } from '../../components/ui/error-notice';
 import { Loading } from '../../components/ui/loading';
 import { BoardPage } from '../../features/board/components/board-page';
 import { NextMatchPanel } from '../../features/board/components/next-match-panel';
+import { NextMatchReadiness } from '../../features/checks/components/match-readiness';
 import { useEvents } from '../../features/events/api/get-events';
 import { useMatches } from '../../features/schedule/api/get-matches';
 import { useTimeline } from '../../features/schedule/api/get-timeline';
 
-/** The schedule feature's data, fed into the board's next-match panel. */
+/** The schedule feature's data, and the checks feature's readiness, fed into the board's next-match panel. */
 function NextMatch({ event }: { event: EventJson }) {
   const timeline = useTimeline(event.id);
   const matches = useMatches(event.id);
-  return <NextMatchPanel timeline={timeline} matches={matches} teamNumber={event.teamNumber} timeZone={event.timeZone} />;
+  return (
+    <NextMatchPanel
+      timeline={timeline}
+      matches={matches}
+      teamNumber={event.teamNumber}
+      timeZone={event.timeZone}
+      readinessOf={(matchId) => <NextMatchReadiness key={matchId} eventId={event.id} matchId={matchId} />}
+    />
+  );
 }
 
-/** Feeds the events and schedule features' data into the board, which must not import another feature. */
+/** Feeds the events, schedule and checks features' data into the board, which must not import another feature. */
 export function BoardRoute() {
   const events = useEvents();
   if (events.isPending) return <Loading label="Loading the board" />;

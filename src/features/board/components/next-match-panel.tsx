@@ -12,6 +12,8 @@ interface NextMatchPanelProps {
   matches: UseQueryResult<readonly MatchTeams[]>;
   teamNumber: number;
   timeZone: string;
+  /** Readiness of the next match, given its id (the route builds it from the checks feature). */
+  readinessOf?: (matchId: string) => ReactNode;
 }
 
 function Empty({ icon, title, children }: { icon: ReactNode; title: string; children: ReactNode }) {
@@ -25,7 +27,7 @@ function Empty({ icon, title, children }: { icon: ReactNode; title: string; chil
 }
 
 /** The top of the board: our next match, loudly, then the rest of ours. */
-export function NextMatchPanel({ timeline, matches, teamNumber, timeZone }: NextMatchPanelProps) {
+export function NextMatchPanel({ timeline, matches, teamNumber, timeZone, readinessOf }: NextMatchPanelProps) {
   if (timeline.isPending) return <Loading label="Loading our next match" />;
   if (timeline.isError) {
     return (
@@ -62,7 +64,7 @@ export function NextMatchPanel({ timeline, matches, teamNumber, timeZone }: Next
   const teams = matches.data?.find((match) => match.id === next.matchId);
   return (
     <div className="flex flex-col gap-4">
-      <NextMatchCard match={next} teams={teams} teamNumber={teamNumber} timeZone={timeZone} />
+      <NextMatchCard match={next} teams={teams} teamNumber={teamNumber} timeZone={timeZone} readiness={readinessOf?.(next.matchId)} />
       {matches.isError && (
         <ErrorNotice
           title="Could not load partners and opponents"

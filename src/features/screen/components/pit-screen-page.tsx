@@ -55,7 +55,7 @@ export function PitScreenPage({ token }: { token: string }) {
     return <Message title="Cannot reach the Pitwright server">Trying again by itself. Check the Wi-Fi of this screen.</Message>;
   }
 
-  const { team, event, timeline, matches } = board.data;
+  const { team, event, timeline, matches, readiness } = board.data;
   const ours = timeline?.ourMatches ?? [];
   const [next, ...later] = ours;
   let body: ReactNode;
@@ -74,6 +74,7 @@ export function PitScreenPage({ token }: { token: string }) {
           teamNumber={event.teamNumber}
           timeZone={event.timeZone}
           now={now}
+          readiness={readiness}
         />
         {later.length > 0 && <ScreenLaterMatches matches={later.slice(0, LATER_SHOWN)} timeZone={event.timeZone} />}
       </div>

@@ -1,8 +1,10 @@
+import type { ReadinessJson } from '@shared/domain/readiness';
 import type { OurMatchJson } from '@shared/domain/timeline';
 import type { MatchJson } from '@shared/schemas/schedule';
 import { allianceSolidClass } from '../../../components/ui/alliance';
 import { Countdown } from '../../../components/ui/countdown';
 import { AlertIcon, QueueIcon } from '../../../components/ui/icons';
+import { ReadinessLight } from '../../../components/ui/readiness-light';
 import { formatZonedTime } from '../../../lib/dates';
 import { formatMinutes, isQueueSoon, lineupOf, matchName } from '../../../lib/match-labels';
 
@@ -29,13 +31,18 @@ function Teams({ label, teams }: { label: string; teams: readonly number[] | und
   );
 }
 
-/** Our next match, for a TV: the alliance as a huge block with its word, the two countdowns, who we play with and against. */
-export function ScreenNextMatch({ match, teams, teamNumber, timeZone, now }: {
+/**
+ * Our next match, for a TV: the alliance as a huge block with its word, whether the robot is
+ * ready, the two countdowns, who we play with and against.
+ */
+export function ScreenNextMatch({ match, teams, teamNumber, timeZone, now, readiness }: {
   match: OurMatchJson;
   teams: MatchJson | undefined;
   teamNumber: number;
   timeZone: string;
   now: Date;
+  /** The server's readiness of our next match; shown only when it is of this one. */
+  readiness: ReadinessJson | null;
 }) {
   const queueSoon = isQueueSoon(match.queueAt, now);
   const { word, opponentWord, partners, opponents } = lineupOf(match.alliance, teams, teamNumber);
@@ -75,6 +82,7 @@ export function ScreenNextMatch({ match, teams, teamNumber, timeZone, now }: {
           </p>
         </div>
       </div>
+      {readiness?.matchId === match.matchId && <ReadinessLight readiness={readiness} look="screen" />}
       <div className="grid grid-cols-2 gap-8">
         <Clock label={queueSoon ? 'Queue call' : 'Queue'} at={match.queueAt} now={now} timeZone={timeZone} loud={queueSoon} />
         <Clock label="Projected start" at={match.projectedStart} now={now} timeZone={timeZone} loud={false} />

@@ -5,8 +5,16 @@ import { screenBoardQueryOptions } from '../api/get-screen-board';
 
 export type ScreenLiveStatus = 'live' | 'reconnecting';
 
-// Everything a screen shows lives in its one answer: any of these makes it stale.
-const REFETCH_ON = ['field:progressed', 'matches:imported', 'matches:updated', 'events:updated'];
+// Everything a screen shows lives in its one answer (readiness included): any of these makes it stale.
+const REFETCH_ON = [
+  'field:progressed',
+  'matches:imported',
+  'matches:updated',
+  'events:updated',
+  'checks:run-started',
+  'checks:marked',
+  'checks:signed-off',
+];
 
 /**
  * The pit screen's own Socket.IO connection, signed in by its token (a TV has no session). After
