@@ -1,13 +1,12 @@
 import type { Transaction } from 'sequelize';
+import { allianceOf } from '../../shared/domain/timeline';
 import type { CreateRunInput } from '../../shared/schemas/checks';
 import { inTransaction } from '../db/transaction';
 import { HttpError, notFound } from '../errors';
 import { ChecklistItemState, ChecklistRun, ChecklistTemplate, ChecklistTemplateVersion, Event, Match } from '../models';
 import { presentRun } from '../presenters/checklist';
+import { presentMatch } from '../presenters/match';
 import { emitToEvent } from '../realtime/broadcast';
-
-const isOurs = (match: Match, teamNumber: number) =>
-  [match.red1, match.red2, match.red3, match.blue1, match.blue2, match.blue3].includes(teamNumber);
 
 /**
  * Starts a run of the template's current version, with one empty state row per item. The caller
@@ -57,7 +56,7 @@ export async function createRun(teamId: string, eventId: string, userId: string,
     if (matchId) {
       const match = await Match.findOne({ where: { id: matchId, eventId: event.id }, transaction });
       if (!match) throw notFound('Match');
-      if (!isOurs(match, event.teamNumber)) {
+      if (allianceOf(presentMatch(match, null), event.teamNumber) === null) {
         throw new HttpError(400, 'invalid', 'Check these fields: matchId', { fields: { matchId: 'We do not play in this match' } });
       }
     }

@@ -1,5 +1,5 @@
 import type { ErrorRequestHandler, RequestHandler } from 'express';
-import { ConnectionError } from 'sequelize';
+import { ConnectionError, UniqueConstraintError } from 'sequelize';
 import { ZodError } from 'zod';
 import { HttpError } from '../errors';
 
@@ -37,6 +37,12 @@ export const errorHandler: ErrorRequestHandler = (error, req, res, next) => {
   }
   if (error instanceof HttpError) {
     res.status(error.status).json({ error: { code: error.code, message: error.message, ...error.extra } });
+    return;
+  }
+  // Commands check for duplicates under a row lock; two creates with one client id in different
+  // teams or events hold different locks, and the key itself then refuses the second.
+  if (error instanceof UniqueConstraintError) {
+    res.status(409).json({ error: { code: 'id_taken', message: 'This record already exists: reload and try again' } });
     return;
   }
   if (error instanceof ConnectionError) {

@@ -1,6 +1,6 @@
 import { Op, type Transaction } from 'sequelize';
-import { evaluateMark, progressOf, type ChecklistItem } from '../../shared/domain/checklist';
-import type { Alliance } from '../../shared/domain/timeline';
+import { evaluateMark, isComplete, progressOf, type ChecklistItem } from '../../shared/domain/checklist';
+import { allianceOf } from '../../shared/domain/timeline';
 import type { PersonJson, RunItemJson, RunJson, RunMatchJson, RunSummaryJson, TemplateJson } from '../../shared/schemas/checks';
 import {
   ChecklistItemState,
@@ -12,6 +12,7 @@ import {
   type ChecklistRun,
   type ChecklistTemplate,
 } from '../models';
+import { presentMatch } from './match';
 
 type People = Map<string, PersonJson>;
 
@@ -64,12 +65,6 @@ export function presentRunItem(item: ChecklistItem, state: ChecklistItemState | 
   };
 }
 
-function allianceOf(match: Match, teamNumber: number): Alliance | null {
-  if ([match.red1, match.red2, match.red3].includes(teamNumber)) return 'red';
-  if ([match.blue1, match.blue2, match.blue3].includes(teamNumber)) return 'blue';
-  return null;
-}
-
 /**
  * Runs with their items (from the version each began with) and marks, in the given order.
  * A handful of queries whatever the number of runs.
@@ -98,7 +93,7 @@ export async function presentRuns(runs: readonly ChecklistRun[], transaction?: T
     const progress = progressOf(items);
     const match = run.matchId ? matchOf.get(run.matchId) : undefined;
     const runMatch: RunMatchJson | null = match
-      ? { id: match.id, level: match.level, number: match.number, alliance: allianceOf(match, teamNumberOf.get(run.eventId)!) }
+      ? { id: match.id, level: match.level, number: match.number, alliance: allianceOf(presentMatch(match, null), teamNumberOf.get(run.eventId)!) }
       : null;
     const signedOffBy = personOf(people, run.signedOffById);
     return {
@@ -111,7 +106,7 @@ export async function presentRuns(runs: readonly ChecklistRun[], transaction?: T
       match: runMatch,
       items,
       progress,
-      complete: progress.requiredDone === progress.required && progress.failed === 0,
+      complete: isComplete(progress),
       signOff: run.signedOffAt && signedOffBy ? { by: signedOffBy, at: run.signedOffAt.toISOString(), reason: run.signOffReason } : null,
       createdAt: run.createdAt.toISOString(),
       createdBy: personOf(people, run.createdById)!,

@@ -102,3 +102,6 @@ export function progressOf(items: readonly (Pick<ChecklistItem, 'required'> & Ru
     failed: items.filter((item) => item.failed).length,
   };
 }
+
+/** Every required item done and no number out of limits: what a lead signs off without a reason. */
+export const isComplete = ({ required, requiredDone, failed }: ReturnType<typeof progressOf>) => requiredDone === required && failed === 0;

@@ -52,12 +52,14 @@ export interface ReadinessItem {
   min: number | null;
   max: number | null;
   unit: string | null;
+  /** When the current mark was made; null when unmarked. */
+  markedAt: string | null;
 }
 
 export interface ReadinessRun {
   name: string;
   items: readonly ReadinessItem[];
-  signOff: { reason: string | null } | null;
+  signOff: { at: string; reason: string | null } | null;
 }
 
 export interface ReadinessFacts {
@@ -93,6 +95,14 @@ const plural = (count: number, one: string, many: string) => `${count} ${count =
 
 const isBumperItem = (item: ReadinessItem) => item.purpose === 'bumper_colour';
 
+/**
+ * A sign-off excuses only what the lead saw open and gave a reason for. One without a reason was
+ * given to a complete run, so whatever is open now was un-marked after it; and a mark made after
+ * the sign-off (a pressure read again and found low) is news the lead has not seen.
+ */
+const isExcused = ({ signOff }: ReadinessRun, item: ReadinessItem) =>
+  signOff !== null && signOff.reason !== null && (item.markedAt === null || Date.parse(item.markedAt) <= Date.parse(signOff.at));
+
 function checklistReasons(facts: ReadinessFacts): RuleReason[] {
   if (facts.preMatchRuns.length === 0) {
     return [{ code: 'checklist_missing', level: 'pending', message: 'No pre-match check has been started for this match' }];
@@ -101,33 +111,33 @@ function checklistReasons(facts: ReadinessFacts): RuleReason[] {
   for (const run of facts.preMatchRuns) {
     // The bumper item has its own rule: its message says which colour is needed.
     const items = run.items.filter((item) => !isBumperItem(item));
-    const failed = items.filter((item) => item.failed);
-    const openRequired = items.filter((item) => item.required && !item.done && !item.failed);
+    const notDone = [...items.filter((item) => item.failed), ...items.filter((item) => item.required && !item.done && !item.failed)];
+    const excused = notDone.filter((item) => isExcused(run, item));
+    const failed = notDone.filter((item) => item.failed && !excused.includes(item));
+    const openRequired = notDone.filter((item) => !item.failed && !excused.includes(item));
     const openAdvisory = items.filter((item) => !item.required && !item.done && !item.failed);
-    if (run.signOff && (failed.length > 0 || openRequired.length > 0)) {
-      const open = [...failed, ...openRequired].map((item) => item.label);
-      const why = run.signOff.reason ? `: “${run.signOff.reason}”` : '';
+    if (excused.length > 0) {
+      const open = excused.map((item) => item.label);
       reasons.push({
         code: 'signed_off_incomplete',
         level: 'at_risk',
-        message: `${run.name} was signed off by a lead with ${plural(open.length, 'item', 'items')} not done (${listLabels(open)})${why}`,
+        message: `${run.name} was signed off by a lead with ${plural(open.length, 'item', 'items')} not done (${listLabels(open)}): “${run.signOff?.reason}”`,
       });
-    } else {
-      for (const item of failed) {
-        const limits = describeLimits(item);
-        reasons.push({
-          code: 'out_of_limits',
-          level: 'not_ready',
-          message: `${item.label}: ${String(item.value)}${item.unit ? ` ${item.unit}` : ''} is outside the limits${limits ? ` (${limits})` : ''}`,
-        });
-      }
-      if (openRequired.length > 0) {
-        reasons.push({
-          code: 'checklist_incomplete',
-          level: 'pending',
-          message: `${run.name}: ${plural(openRequired.length, 'required item', 'required items')} open (${listLabels(openRequired.map((item) => item.label))})`,
-        });
-      }
+    }
+    for (const item of failed) {
+      const limits = describeLimits(item);
+      reasons.push({
+        code: 'out_of_limits',
+        level: 'not_ready',
+        message: `${item.label}: ${String(item.value)}${item.unit ? ` ${item.unit}` : ''} is outside the limits${limits ? ` (${limits})` : ''}`,
+      });
+    }
+    if (openRequired.length > 0) {
+      reasons.push({
+        code: 'checklist_incomplete',
+        level: 'pending',
+        message: `${run.name}: ${plural(openRequired.length, 'required item', 'required items')} open (${listLabels(openRequired.map((item) => item.label))})`,
+      });
     }
     if (openAdvisory.length > 0) {
       reasons.push({

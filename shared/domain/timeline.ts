@@ -115,7 +115,8 @@ function compareRows(a: Row, b: Row): number {
   );
 }
 
-function allianceOf(match: TimelineMatch, teamNumber: number): Alliance | null {
+/** The alliance a team plays on in a match; null when it does not play in it. */
+export function allianceOf(match: { red: readonly number[]; blue: readonly number[] }, teamNumber: number): Alliance | null {
   if (match.red.includes(teamNumber)) return 'red';
   if (match.blue.includes(teamNumber)) return 'blue';
   return null;

@@ -26,7 +26,6 @@ export function isInstant(value: string): boolean {
   return date.getUTCFullYear() === year && date.getUTCMonth() === month - 1 && date.getUTCDate() === day;
 }
 
-
 export const INSTANT_MESSAGE = 'Use an ISO time with an offset, e.g. 2027-03-05T15:00:00Z';
 /** An instant in, its canonical ISO form (`…Z`, milliseconds) out. */
 export const instantField = z

@@ -1,7 +1,7 @@
 import { expect, it } from 'vitest';
-import { ROLES, type Role } from '../../shared/roles';
+import { can, ROLES, type Role } from '../../shared/roles';
 import type { RunSummaryJson, TemplateJson } from '../../shared/schemas/checks';
-import { User } from '../../server/models';
+import { ChecklistMark, User } from '../../server/models';
 import { createDemoMatches, demoEmail, seedDemo } from '../../server/db/seed/demo';
 import { seedDemoChecklists } from '../../server/db/seed/demo-checklists';
 import { inTransaction } from '../../server/db/transaction';
@@ -50,6 +50,13 @@ it('seeds a checklist per phase and our next match half checked: at risk, for th
     ].sort(),
   );
   expect(runs.find((run) => run.name === 'Robot inspection')?.signOff?.by.id).toBe(users.lead.id);
+  // Every seeded mark is one the API would have taken: by a member whose role may mark.
+  const markers = await ChecklistMark.findAll({ where: { runId: runs.map((run) => run.id) } });
+  expect(markers.length).toBeGreaterThan(0);
+  for (const { markedById } of markers) {
+    const role = ROLES.find((candidate) => users[candidate].id === markedById);
+    expect(role && can([role], 'checks:mark'), `marked by ${role}`).toBe(true);
+  }
 
   const timeline = (await crew.get(`/api/events/${own.event.id}/timeline?at=${now.toISOString()}`)).body;
   const next = timeline.ourMatches[0];

@@ -146,16 +146,18 @@ export async function seedDemoChecklists(
     const before = await run('Before every match', played.id, minutesBefore(played.startedAt, 45), users.lead);
     const checkedAt = minutesBefore(played.startedAt, 15);
     await before.mark('Bumpers match our alliance colour', colourOf(played.alliance), users.crew, checkedAt);
-    for (const label of ['Main breaker on', 'Radio and its cables secured', 'No loose fasteners', 'Camera lens wiped']) await before.mark(label, true, users.crew, checkedAt);
-    for (const label of ['Battery latched and strapped', 'Spare battery waiting on the cart']) await before.mark(label, true, users.battery, checkedAt);
+    // The battery items too: the battery handler's role does not mark checklists (only admin, lead and crew may).
+    for (const label of ['Main breaker on', 'Radio and its cables secured', 'No loose fasteners', 'Camera lens wiped', 'Battery latched and strapped', 'Spare battery waiting on the cart']) {
+      await before.mark(label, true, users.crew, checkedAt);
+    }
     await before.mark('Stored air pressure', 118, users.crew, checkedAt);
     await before.mark('Code version confirmed', 'build 41', users.lead, checkedAt);
 
     const backAt = new Date(played.startedAt.getTime() + 8 * MINUTE_MS);
     if (backAt < now) {
       const after = await run('After every match', played.id, backAt, users.crew);
-      await after.mark('Battery out and on a charger', true, users.battery, backAt);
-      await after.mark('Battery voltage as it came off', 12.1, users.battery, backAt);
+      await after.mark('Battery out and on a charger', true, users.crew, backAt);
+      await after.mark('Battery voltage as it came off', 12.1, users.crew, backAt);
       await after.mark('Walk-around for damage', true, users.crew, backAt, 'Left intake bracket slightly bent');
     }
   }
@@ -164,7 +166,7 @@ export async function seedDemoChecklists(
     // Our next match: started automatically at our last match's field mark, half done.
     const upcoming = await run('Before every match', next.id, played.startedAt, users.lead);
     await upcoming.mark('Bumpers match our alliance colour', colourOf(next.alliance), users.crew, minutesBefore(now, 6));
-    await upcoming.mark('Battery latched and strapped', true, users.battery, minutesBefore(now, 5));
+    await upcoming.mark('Battery latched and strapped', true, users.crew, minutesBefore(now, 5));
     await upcoming.mark('Main breaker on', true, users.crew, minutesBefore(now, 4));
     await upcoming.mark('Stored air pressure', 112, users.crew, minutesBefore(now, 3), 'Topped up after the last match');
     await upcoming.mark('Code version confirmed', 'build 42', users.lead, minutesBefore(now, 2));

@@ -42,7 +42,6 @@ const LOOKS = {
     badge: 'size-12',
     icon: 'size-8',
     word: 'text-3xl',
-    subject: 'text-lg',
     reasons: 'gap-1.5 text-lg',
     reasonIcon: 'mt-1 size-5',
   },
@@ -54,7 +53,6 @@ const LOOKS = {
     badge: 'size-20',
     icon: 'size-14',
     word: 'text-6xl whitespace-nowrap',
-    subject: 'text-3xl',
     reasons: 'min-w-0 flex-1 gap-2 text-3xl',
     reasonIcon: 'mt-1 size-8',
   },
@@ -62,8 +60,6 @@ const LOOKS = {
 
 interface ReadinessLightProps {
   readiness: ReadinessJson;
-  /** What the light is for, e.g. "Qualification 14". */
-  subject?: string;
   /** `screen`: the pit screen's dark, big version. */
   look?: keyof typeof LOOKS;
 }
@@ -73,7 +69,7 @@ interface ReadinessLightProps {
  * reasons, worst first. Presentational: the board, the Checks page and the pit screen each fetch
  * the readiness their own way.
  */
-export function ReadinessLight({ readiness, subject, look = 'page' }: ReadinessLightProps) {
+export function ReadinessLight({ readiness, look = 'page' }: ReadinessLightProps) {
   const sizes = LOOKS[look];
   const colours = sizes.colours[readiness.state];
   const Icon = ICON[readiness.state];
@@ -83,10 +79,7 @@ export function ReadinessLight({ readiness, subject, look = 'page' }: ReadinessL
         <span className={`flex shrink-0 items-center justify-center rounded-full ${colours.badge} ${sizes.badge}`}>
           <Icon className={sizes.icon} strokeWidth={3} />
         </span>
-        <p className="min-w-0 leading-tight">
-          <span className={`font-black tracking-wide uppercase ${colours.word} ${sizes.word}`}>{WORD[readiness.state]}</span>
-          {subject && <span className={`block font-semibold ${sizes.subject}`}>for {subject}</span>}
-        </p>
+        <p className={`min-w-0 leading-tight font-black tracking-wide uppercase ${colours.word} ${sizes.word}`}>{WORD[readiness.state]}</p>
       </div>
       {readiness.reasons.length > 0 && (
         <ul className={`flex flex-col ${sizes.reasons}`}>

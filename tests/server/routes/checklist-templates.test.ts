@@ -162,6 +162,15 @@ describe("another team's template", () => {
     expect((await clients.lead.get(`/api/checklist-templates/${theirs.id}`)).body).toEqual(theirs);
   });
 
+  it('two teams sending one client id at the same moment: one template is made, the other answer is 409, never a 500', async () => {
+    const own = await ownTeam();
+    const id = randomUUID();
+    // Each team's create locks only its own rows, so the primary key is what refuses the second.
+    const answers = await Promise.all([clients.lead, own.lead].map((client) => client.post('/api/checklist-templates', { ...preMatchBody(), id })));
+    expect(answers.map((answer) => answer.status).sort()).toEqual([201, 409]);
+    expect(answers.find((answer) => answer.status === 409)?.body.error.code).toBe('id_taken');
+  });
+
   it('answers 400 for an id that is not a UUID', async () => {
     const answer = await clients.lead.get('/api/checklist-templates/pre-1');
     expect(answer.status).toBe(400);

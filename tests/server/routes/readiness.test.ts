@@ -131,6 +131,22 @@ describe('readiness states', () => {
     });
   });
 
+  it('a sign-off of a complete run excuses nothing found after it: a pressure read again low is not ready', async () => {
+    const own = await ownMatch();
+    const { run, mark, markAllRequired } = await own.startRun();
+    await markAllRequired();
+    await mark('Wipe the camera lens', true);
+    const signed = await own.lead.post(`/api/checklist-runs/${run.id}/sign-off`, {});
+    expect(signed.status).toBe(200);
+    expect(signed.body.signOff.reason).toBeNull();
+    await mark('Stored air pressure', 80);
+    expect(await own.readiness('09:00')).toEqual({
+      matchId: own.match.id,
+      state: 'not_ready',
+      reasons: [{ code: 'out_of_limits', level: 'not_ready', message: 'Stored air pressure: 80 psi is outside the limits (100 – 120 psi)' }],
+    });
+  });
+
   it('reads only pre-match runs: an open post-match run of the match changes nothing', async () => {
     const own = await ownMatch();
     const { mark, markAllRequired } = await own.startRun();

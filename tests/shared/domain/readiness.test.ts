@@ -14,7 +14,7 @@ const NOW = new Date('2027-03-06T15:00:00.000Z');
 const minutesFromNow = (minutes: number) => new Date(NOW.getTime() + minutes * 60_000).toISOString();
 
 function item(label: string, overrides: Partial<ReadinessItem> = {}): ReadinessItem {
-  return { label, required: true, done: false, failed: false, value: null, purpose: null, min: null, max: null, unit: null, ...overrides };
+  return { label, required: true, done: false, failed: false, value: null, purpose: null, min: null, max: null, unit: null, markedAt: null, ...overrides };
 }
 const ticked = (label: string, overrides: Partial<ReadinessItem> = {}) => item(label, { done: true, value: true, ...overrides });
 const bumpers = (value: string | null) => item('Bumper colour', { purpose: 'bumper_colour', value, done: value !== null });
@@ -131,8 +131,8 @@ describe('computeReadiness: every reason', () => {
   });
 
   it('a lead sign-off with items open or out of limits turns them into one at-risk reason with the written reason', () => {
-    const pressure = item('Stored air pressure', { value: 121, failed: true, min: 60, max: 120, unit: 'psi' });
-    const signedOff = run([pressure, item('Radio secured'), bumpers('Red')], { reason: 'Gauge reads high; checked with a second gauge' });
+    const pressure = item('Stored air pressure', { value: 121, failed: true, min: 60, max: 120, unit: 'psi', markedAt: minutesFromNow(-15) });
+    const signedOff = run([pressure, item('Radio secured'), bumpers('Red')], { at: minutesFromNow(-10), reason: 'Gauge reads high; checked with a second gauge' });
     const result = computeReadiness(facts({ preMatchRuns: [signedOff] }, -2), NOW);
     expect(result.state).toBe('at_risk');
     expect(result.reasons).toEqual([
@@ -145,8 +145,31 @@ describe('computeReadiness: every reason', () => {
   });
 
   it('a sign-off does not excuse bumpers of the wrong colour', () => {
-    const signedOff = run([item('Radio secured'), bumpers('Blue')], { reason: 'Radio checked by the field staff' });
+    const signedOff = run([item('Radio secured'), bumpers('Blue')], { at: minutesFromNow(-10), reason: 'Radio checked by the field staff' });
     expect(codes(computeReadiness(facts({ preMatchRuns: [signedOff] }), NOW))).toEqual(['bumper_mismatch', 'signed_off_incomplete']);
+  });
+
+  it('a sign-off without a reason (the run was complete then) excuses nothing found open or out of limits since', () => {
+    const lowAgain = item('Stored air pressure', { value: 80, failed: true, min: 100, max: 120, unit: 'psi', markedAt: minutesFromNow(-2) });
+    const signedOff = run([lowAgain, item('Radio secured'), bumpers('Red')], { at: minutesFromNow(-10), reason: null });
+    const result = computeReadiness(facts({ preMatchRuns: [signedOff] }, -1), NOW);
+    expect(result.state).toBe('not_ready');
+    expect(codes(result)).toEqual(['out_of_limits', 'checklist_incomplete', 'queue_call_passed']);
+  });
+
+  it('a number marked out of limits after a sign-off with a reason is not excused by it', () => {
+    const lowAgain = item('Stored air pressure', { value: 80, failed: true, min: 100, max: 120, unit: 'psi', markedAt: minutesFromNow(-2) });
+    const signedOff = run([lowAgain, item('Radio secured'), bumpers('Red')], { at: minutesFromNow(-10), reason: 'Radio checked by the field staff' });
+    const result = computeReadiness(facts({ preMatchRuns: [signedOff] }), NOW);
+    expect(result.state).toBe('not_ready');
+    expect(result.reasons).toEqual([
+      { code: 'out_of_limits', level: 'not_ready', message: 'Stored air pressure: 80 psi is outside the limits (100 – 120 psi)' },
+      {
+        code: 'signed_off_incomplete',
+        level: 'at_risk',
+        message: 'Before the match was signed off by a lead with 1 item not done (Radio secured): “Radio checked by the field staff”',
+      },
+    ]);
   });
 
   it('no battery installed, once batteries are tracked: at risk, then not ready at the queue call', () => {

@@ -1,5 +1,5 @@
 import type { Mutation, QueryClient } from '@tanstack/react-query';
-import { evaluateMark, progressOf, type MarkValue } from '@shared/domain/checklist';
+import { evaluateMark, isComplete, progressOf, type MarkValue } from '@shared/domain/checklist';
 import type { PersonJson, RunItemJson, RunJson } from '@shared/schemas/checks';
 import { serverNow } from '../../../lib/server-clock';
 
@@ -30,7 +30,7 @@ export interface MarkContext {
 export function withItem(run: RunJson, item: RunItemJson): RunJson {
   const items = run.items.map((current) => (current.id === item.id ? item : current));
   const progress = progressOf(items);
-  return { ...run, items, progress, complete: progress.requiredDone === progress.required && progress.failed === 0 };
+  return { ...run, items, progress, complete: isComplete(progress) };
 }
 
 /** The item as a mark (or, with null, an un-mark) will leave it, before the server confirms. */

@@ -18,12 +18,16 @@ interface ControlProps {
   onClear?: () => void;
 }
 
+/** The item's label after a button's word, for screen readers: a run lists many Saves and Clears. */
+export const ForItem = ({ label }: { label: string }) => <span className="sr-only"> {label}</span>;
+
 /** Beside Save: takes the value back (the run's history keeps it). */
-function ClearButton({ onClear }: { onClear: (() => void) | undefined }) {
+function ClearButton({ label, onClear }: { label: string; onClear: (() => void) | undefined }) {
   if (!onClear) return null;
   return (
     <Button variant="quiet" size="lg" icon={<UndoIcon className="size-5" />} onClick={onClear}>
       Clear
+      <ForItem label={label} />
     </Button>
   );
 }
@@ -125,8 +129,9 @@ export function NumberControl({ item, disabled, onMark, labelId, describedBy, on
         </div>
         <Button type="submit" size="lg" variant={draft === null ? 'secondary' : 'primary'} disabled={disabled}>
           Save
+          <ForItem label={item.label} />
         </Button>
-        <ClearButton onClear={onClear} />
+        <ClearButton label={item.label} onClear={onClear} />
       </div>
       {problem && (
         <p id={problemId} className="font-semibold text-danger">
@@ -193,8 +198,9 @@ export function TextControl({ item, disabled, onMark, labelId, describedBy, onCl
       <div className="flex gap-3">
         <Button type="submit" size="lg" variant={draft === null ? 'secondary' : 'primary'} disabled={disabled}>
           Save
+          <ForItem label={item.label} />
         </Button>
-        <ClearButton onClear={onClear} />
+        <ClearButton label={item.label} onClear={onClear} />
       </div>
     </form>
   );

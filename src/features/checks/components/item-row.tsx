@@ -11,7 +11,7 @@ import { StatusTag } from '../../../components/ui/status-tag';
 import { isApiError } from '../../../lib/api-client';
 import { useClearItem } from '../api/clear-item';
 import { useMarkItem } from '../api/mark-item';
-import { ChoiceControl, NumberControl, TextControl, TickControl } from './item-controls';
+import { ChoiceControl, ForItem, NumberControl, TextControl, TickControl } from './item-controls';
 
 /** Why the server refused a mark, in the words it gave for the value when it gave some. */
 function refusal(error: unknown): string {
@@ -105,9 +105,16 @@ export function ItemRow({ runId, item, now, canMark }: ItemRowProps) {
         {canMark && item.kind === 'choice' && item.value !== null && (
           <Button variant="quiet" className="ml-auto" icon={<UndoIcon className="size-5" />} onClick={onClear}>
             Clear
+            <ForItem label={item.label} />
           </Button>
         )}
       </div>
+      {/* No field here writes a note yet, but the API takes one with a mark (the demo has some): it must not vanish. */}
+      {item.note && (
+        <p className="break-words">
+          <span className="font-semibold">Note:</span> {item.note}
+        </p>
+      )}
       {failure && (
         <div role="alert" className="flex flex-wrap items-center gap-3 rounded-xl border-2 border-danger bg-surface p-3">
           <AlertIcon className="size-6 text-danger" />
@@ -118,6 +125,7 @@ export function ItemRow({ runId, item, now, canMark }: ItemRowProps) {
           {!(isApiError(failure) && failure.status >= 400 && failure.status < 500) && (
             <Button variant="secondary" onClick={retry}>
               Try again
+              <ForItem label={item.label} />
             </Button>
           )}
         </div>

@@ -8,7 +8,7 @@ import { useRuns } from '../api/get-runs';
 import { RunProgress } from './run-progress';
 
 /** The readiness light of one of our matches, fetched (the light itself is presentational). */
-export function MatchReadiness({ eventId, matchId, subject }: { eventId: string; matchId: string; subject?: string }) {
+export function MatchReadiness({ eventId, matchId }: { eventId: string; matchId: string }) {
   const readiness = useReadiness(eventId, matchId);
   // Small: it sits inside a card, among the countdowns.
   if (readiness.isPending) {
@@ -21,7 +21,7 @@ export function MatchReadiness({ eventId, matchId, subject }: { eventId: string;
   if (readiness.isError) {
     return <ErrorNotice title="Could not tell whether the robot is ready" error={readiness.error} onRetry={() => readiness.refetch()} retrying={readiness.isFetching} />;
   }
-  return <ReadinessLight readiness={readiness.data} subject={subject} />;
+  return <ReadinessLight readiness={readiness.data} />;
 }
 
 /**

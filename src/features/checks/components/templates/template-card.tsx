@@ -1,7 +1,7 @@
 import { Link } from 'react-router';
 import type { TemplateJson } from '@shared/schemas/checks';
 import { ChecksIcon } from '../../../../components/ui/icons';
-import { VersionLine } from './last-edited';
+import { VersionLine } from './version-line';
 
 /** One template in the list; the whole card opens it. */
 export function TemplateCard({ template, canEdit }: { template: TemplateJson; canEdit: boolean }) {

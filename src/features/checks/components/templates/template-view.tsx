@@ -4,7 +4,7 @@ import { LinkButton } from '../../../../components/ui/button';
 import { Card } from '../../../../components/ui/card';
 import { PageHeader } from '../../../../components/ui/page-header';
 import { ItemTags } from './item-tags';
-import { VersionLine } from './last-edited';
+import { VersionLine } from './version-line';
 
 /** A checklist for those who do the checks but do not write them. */
 export function TemplateView({ template }: { template: TemplateJson }) {
