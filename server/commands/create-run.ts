@@ -3,10 +3,11 @@ import { allianceOf } from '../../shared/domain/timeline';
 import type { CreateRunInput } from '../../shared/schemas/checks';
 import { inTransaction } from '../db/transaction';
 import { HttpError, notFound } from '../errors';
-import { ChecklistItemState, ChecklistRun, ChecklistTemplate, ChecklistTemplateVersion, Event, Match } from '../models';
+import { ChecklistRun, ChecklistTemplate, ChecklistTemplateVersion, Event, Match } from '../models';
 import { presentRun } from '../presenters/checklist';
 import { presentMatch } from '../presenters/match';
 import { emitToEvent } from '../realtime/broadcast';
+import { createItemStates } from './item-states';
 
 /**
  * Starts a run of the template's current version, with one empty state row per item. The caller
@@ -30,10 +31,7 @@ export async function startRun(
     { id, eventId: event.id, templateId: template.id, templateVersionId: version.id, matchId, createdById: userId },
     { transaction },
   );
-  await ChecklistItemState.bulkCreate(
-    version.items.map((item) => ({ runId: run.id, itemId: item.id, value: null, note: null, markedById: null, markedAt: null })),
-    { transaction },
-  );
+  await createItemStates(run.id, version.items, transaction);
   transaction.afterCommit(() => emitToEvent(event.id, 'checks:run-started', { eventId: event.id, runId: run.id, matchId }));
   return { run, created: true };
 }

@@ -2,15 +2,12 @@ import { valueProblem, type MarkValue } from '../../shared/domain/checklist';
 import type { MarkInput } from '../../shared/schemas/checks';
 import { inTransaction } from '../db/transaction';
 import { HttpError, notFound } from '../errors';
-import { ChecklistItemState, ChecklistMark, ChecklistRun, ChecklistTemplateVersion, encodeMarkValue, User } from '../models';
+import { ChecklistItemState, ChecklistRun, ChecklistTemplateVersion, User } from '../models';
 import { presentRunItem } from '../presenters/checklist';
 import { emitToEvent } from '../realtime/broadcast';
+import { recordMark } from './item-states';
 
-/**
- * Sets one item's current mark (null: un-marked) and appends it to the run's history. The state
- * row is updated by its key alone: marks of other items of the run never wait for this one, and
- * of two marks of the same item the later write wins whole (value, note, who and when).
- */
+/** Marks or un-marks one item; of two marks of the same item the later write wins whole (value, note, who and when). */
 export async function writeMark(teamId: string, userId: string, runId: string, itemId: string, value: MarkValue | null, note: string | null) {
   return inTransaction(async (transaction) => {
     const run = await ChecklistRun.ofTeam(teamId, runId, { transaction });
@@ -20,15 +17,7 @@ export async function writeMark(teamId: string, userId: string, runId: string, i
     const problem = value === null ? null : valueProblem(item, value);
     if (problem) throw new HttpError(400, 'invalid', 'Check these fields: value', { fields: { value: problem } });
 
-    const markedAt = new Date();
-    const stored = encodeMarkValue(value);
-    await ChecklistItemState.update(
-      value === null
-        ? { value: null, note: null, markedById: null, markedAt: null }
-        : { value: stored, note, markedById: userId, markedAt },
-      { where: { runId: run.id, itemId }, transaction },
-    );
-    await ChecklistMark.create({ runId: run.id, itemId, value: stored, note, markedById: userId, markedAt }, { transaction });
+    await recordMark({ runId: run.id, itemId, value, note, markedById: userId, markedAt: new Date() }, transaction);
     // Read back under the row lock the update holds: this is what was stored.
     const state = await ChecklistItemState.findOne({ where: { runId: run.id, itemId }, transaction, rejectOnEmpty: true });
     const user = await User.findByPk(userId, { attributes: ['id', 'name'], transaction, rejectOnEmpty: true });

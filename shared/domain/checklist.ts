@@ -3,6 +3,7 @@
  * value fits the item at all. Pure, shared by the server (which stores and answers) and the
  * client (which shows a tick at once, before the server confirms it).
  */
+import type { Role } from '../roles';
 
 export const CHECKLIST_PHASES = ['pre_match', 'post_match', 'inspection', 'load_in', 'pack_out'] as const;
 export type ChecklistPhase = (typeof CHECKLIST_PHASES)[number];
@@ -38,7 +39,8 @@ export interface ChecklistItem {
   unit: string | null;
   /** The choices of a `choice` item, in order; empty for other kinds. */
   options: string[];
-  role: string | null;
+  /** Who usually does it: a hint shown as a tag, never a permission. */
+  role: Role | null;
   purpose: ItemPurpose | null;
 }
 

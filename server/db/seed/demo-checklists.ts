@@ -3,14 +3,12 @@ import type { ChecklistItem, MarkValue } from '../../../shared/domain/checklist'
 import type { Alliance } from '../../../shared/domain/timeline';
 import type { Role } from '../../../shared/roles';
 import { createTemplateSchema, type CreateTemplateInput } from '../../../shared/schemas/checks';
+import { createItemStates, recordMark } from '../../commands/item-states';
 import { itemsWithIds } from '../../commands/template-items';
 import {
-  ChecklistItemState,
-  ChecklistMark,
   ChecklistRun,
   ChecklistTemplate,
   ChecklistTemplateVersion,
-  encodeMarkValue,
   type Event,
   type Team,
   type User,
@@ -113,16 +111,10 @@ export async function seedDemoChecklists(
       { eventId: event.id, templateId: template.id, templateVersionId: version.id, matchId, createdById: createdBy.id, createdAt, updatedAt: createdAt },
       { transaction, silent: true },
     );
-    await ChecklistItemState.bulkCreate(
-      version.items.map((item) => ({ runId: created.id, itemId: item.id, value: null, note: null, markedById: null, markedAt: null })),
-      { transaction },
-    );
+    await createItemStates(created.id, version.items, transaction);
     const itemOf = (label: string): ChecklistItem => version.items.find((item) => item.label === label)!;
     const mark = async (label: string, value: MarkValue, by: User, markedAt: Date, note: string | null = null) => {
-      const item = itemOf(label);
-      const stored = encodeMarkValue(value);
-      await ChecklistItemState.update({ value: stored, note, markedById: by.id, markedAt }, { where: { runId: created.id, itemId: item.id }, transaction });
-      await ChecklistMark.create({ runId: created.id, itemId: item.id, value: stored, note, markedById: by.id, markedAt }, { transaction });
+      await recordMark({ runId: created.id, itemId: itemOf(label).id, value, note, markedById: by.id, markedAt }, transaction);
     };
     return { run: created, mark };
   }

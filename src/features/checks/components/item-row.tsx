@@ -89,7 +89,7 @@ export function ItemRow({ runId, item, now, canMark }: ItemRowProps) {
 
       <div className="flex flex-wrap items-center gap-x-4 gap-y-2">
         <ItemState item={item} />
-        {item.role && <StatusTag tone="neutral" icon={<UserIcon className="size-4" />}>{ROLE_LABELS[item.role as keyof typeof ROLE_LABELS] ?? item.role}</StatusTag>}
+        {item.role && <StatusTag tone="neutral" icon={<UserIcon className="size-4" />}>{ROLE_LABELS[item.role]}</StatusTag>}
         {item.markedBy && item.markedAt && (
           <span className="text-ink-muted">
             <span className="font-semibold text-ink">{item.markedBy.name}</span> · <RelativeTime at={item.markedAt} now={now} />

@@ -8,7 +8,7 @@ export interface ItemFacts {
   /** "10 – 14 V", from describeLimits. */
   limits: string | null;
   options: string[];
-  role: string | null;
+  role: Role | null;
   bumperColour: boolean;
 }
 
@@ -27,7 +27,7 @@ export function ItemTags({ kind, required, limits, options, role, bumperColour }
         {required ? 'Required' : 'Optional'}
       </li>
       {bumperColour && <li className={`${tag} bg-sunken text-ink`}>Bumper colour</li>}
-      {role && <li className={`${tag} border border-line text-ink-muted`}>{ROLE_LABELS[role as Role] ?? role}</li>}
+      {role && <li className={`${tag} border border-line text-ink-muted`}>{ROLE_LABELS[role]}</li>}
     </ul>
   );
 }
