@@ -1,6 +1,6 @@
 import type { ComponentType, SVGProps } from 'react';
 import type { Capability } from '@shared/roles';
-import { BoardIcon, CalendarIcon, ChecksIcon, ScheduleIcon, TeamIcon } from '../components/ui/icons';
+import { BatteryIcon, BoardIcon, CalendarIcon, ChecksIcon, ScheduleIcon, TeamIcon } from '../components/ui/icons';
 
 export interface NavItem {
   to: string;
@@ -15,6 +15,7 @@ export const NAV_ITEMS: NavItem[] = [
   { to: '/', label: 'Board', icon: BoardIcon, capability: 'board:read' },
   { to: '/schedule', label: 'Schedule', icon: ScheduleIcon, capability: 'board:read' },
   { to: '/checks', label: 'Checks', icon: ChecksIcon, capability: 'board:read' },
+  { to: '/batteries', label: 'Batteries', icon: BatteryIcon, capability: 'board:read' },
   { to: '/events', label: 'Events', icon: CalendarIcon, capability: 'events:read' },
   { to: '/team', label: 'Team', icon: TeamIcon, capability: 'team:read' },
 ];

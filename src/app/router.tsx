@@ -14,6 +14,7 @@ import { safeNext, signInPath } from '../lib/safe-next';
 import { AppShell } from './app-shell';
 import { RequireCapability } from './require-capability';
 import { NotFound, RouteError } from './route-error';
+import { BatteriesRoute, BatteryLabelsRoute, BatteryRoute } from './routes/batteries-route';
 import { BoardRoute } from './routes/board-route';
 import { ChecksRoute, RunRoute } from './routes/checks-route';
 import { ScheduleRoute } from './routes/schedule-route';
@@ -97,6 +98,18 @@ export function createAppRouter(queryClient: QueryClient) {
             {
               path: 'checks/templates/:templateId',
               element: guarded('board:read', <EditTemplatePage />),
+            },
+            {
+              path: 'batteries',
+              element: guarded('board:read', <BatteriesRoute />),
+            },
+            {
+              path: 'batteries/labels',
+              element: guarded('board:read', <BatteryLabelsRoute />),
+            },
+            {
+              path: 'batteries/:batteryId',
+              element: guarded('board:read', <BatteryRoute />),
             },
             {
               path: 'events',

@@ -192,3 +192,10 @@ export const GripIcon = (p: IconProps) => (
     <path d="M9 5h.01M15 5h.01M9 12h.01M15 12h.01M9 19h.01M15 19h.01" strokeWidth={3} />
   </Icon>
 );
+
+export const BatteryIcon = (p: IconProps) => (
+  <Icon {...p}>
+    <rect x="3" y="7" width="18" height="13" rx="2" />
+    <path d="M7 7V4.5h3V7M14 7V4.5h3V7M6.5 13.5h4M15 11.5v4M13 13.5h4" />
+  </Icon>
+);
