@@ -1,13 +1,18 @@
 /**
- * `npm run bench`: figures, no assertions. Three parts:
+ * `npm run bench`: figures, no assertions. Four parts:
  *  1. the timeline computation for 200 matches (median time per call, in-process);
- *  2. request rates and latencies of the main reads against a running Pitwright (`npm start`);
- *  3. fan-out: from a field mark to its receipt on 50 connected sockets (p50, p95, p99).
+ *  2. the battery rotation plan for 150 matches × 24 batteries × 6 bays, and with each doubled (in-process);
+ *  3. request rates and latencies of the main reads against a running Pitwright (`npm start`);
+ *  4. fan-out: from a field mark to its receipt on 50 connected sockets (p50, p95, p99).
  * Loopback only. BENCH_URL (default http://127.0.0.1:5180), BENCH_SECONDS (5), BENCH_CONNECTIONS (20).
- * Part 3 marks the demo's next match and undoes it again, so the data ends as it began.
+ * BENCH_ONLY picks parts by name (timeline, plan, reads, fanout; comma-separated): `BENCH_ONLY=plan
+ * npm run bench` needs no server. Part 4 marks the demo's next match and undoes it again, so the
+ * data ends as it began.
  */
 import autocannon from 'autocannon';
 import { io } from 'socket.io-client';
+import { planBatteries } from '../shared/domain/battery-plan.ts';
+import { BATTERY_DEFAULTS } from '../shared/domain/battery-state.ts';
 import { computeTimeline, TIMELINE_DEFAULTS } from '../shared/domain/timeline.ts';
 
 const baseUrl = process.env.BENCH_URL ?? 'http://127.0.0.1:5180';
@@ -16,6 +21,9 @@ const connections = Number(process.env.BENCH_CONNECTIONS ?? 20);
 if (!/^http:\/\/(127\.\d+\.\d+\.\d+|localhost|\[::1\])(:\d+)?$/.test(baseUrl)) {
   throw new Error('BENCH_URL must be a loopback address');
 }
+
+const only = process.env.BENCH_ONLY?.split(',').map((part) => part.trim());
+const runs = (part) => !only || only.includes(part);
 
 const percentile = (sorted, p) => sorted[Math.min(sorted.length - 1, Math.floor((p / 100) * sorted.length))];
 const ms = (value) => value.toFixed(value < 1 ? 3 : 1);
@@ -42,6 +50,64 @@ function benchTimeline() {
   }
   times.sort((a, b) => a - b);
   console.log(`timeline, 200 matches: median ${ms(percentile(times, 50))} ms per call, p99 ${ms(percentile(times, 99))} ms (1000 calls)\n`);
+}
+
+/** A made-up but busy weekend: our queue calls 8 min apart, a fleet in every state, 6 A bays. */
+function planInput(matchCount, batteryCount, bayCount) {
+  const now = Date.parse('2027-03-05T15:00:00Z');
+  const at = (minutes) => new Date(now + minutes * 60_000).toISOString();
+  const health = ['good', 'good', 'good', 'watch', 'good', 'replace'];
+  return {
+    now: at(0),
+    batteries: Array.from({ length: batteryCount }, (_, i) => ({
+      id: `battery-${i}`,
+      label: `B${String(i + 1).padStart(2, '0')}`,
+      status: i % 11 === 10 ? 'retired' : i % 4 === 1 ? 'charging' : 'ready',
+      health: health[i % health.length],
+      ratedAh: 18,
+      stateOfChargePercent: i % 5 === 4 ? null : 60 + ((i * 37) % 41),
+      chargingUntil: i % 4 === 1 && i < bayCount * 4 ? at(10 + i) : null,
+      chargingBay: i % 4 === 1 && i < bayCount * 4 ? Math.floor(i / 4) + 1 : null,
+      installedForMatchId: i === 0 ? 'match-1' : null,
+      usesThisEvent: (i * 7) % 5,
+    })),
+    bays: Array.from({ length: bayCount }, (_, i) => ({ bay: i + 1, chargerId: `charger-${Math.floor(i / 3)}`, label: `bay ${i + 1}`, currentA: 6 })),
+    matches: Array.from({ length: matchCount }, (_, i) => ({ matchId: `match-${i + 1}`, queueAt: at(5 + i * 8), projectedStart: at(15 + i * 8) })),
+    outOfRobotAfterMinutes: 2.5 + 3,
+    drawPercent: 6.3,
+    minimumStartChargePercent: BATTERY_DEFAULTS.minimumStartChargePercent,
+    chargeFactor: BATTERY_DEFAULTS.chargeFactor,
+    chargeTailMinutes: BATTERY_DEFAULTS.chargeTailMinutes,
+  };
+}
+
+function benchPlan() {
+  const cases = [
+    ['150 matches × 24 batteries × 6 bays', planInput(150, 24, 6)],
+    ['300 matches (doubled)', planInput(300, 24, 6)],
+    ['48 batteries (doubled)', planInput(150, 48, 6)],
+    ['12 bays (doubled)', planInput(150, 24, 12)],
+  ];
+  // Warm every case up first, so the first one measured does not pay for the compiler alone.
+  for (const [, input] of cases) for (let i = 0; i < 200; i++) planBatteries(input);
+  let base = null;
+  console.log('battery rotation plan: median per call over 500 calls');
+  for (const [name, input] of cases) {
+    const times = [];
+    for (let i = 0; i < 500; i++) {
+      const t0 = performance.now();
+      planBatteries(input);
+      times.push(performance.now() - t0);
+    }
+    times.sort((a, b) => a - b);
+    const median = percentile(times, 50);
+    base ??= median;
+    const growth = median === base ? '' : `   ×${(median / base).toFixed(2)} the first`;
+    const plan = planBatteries(input);
+    const short = plan.warnings.filter((warning) => warning.code === 'no_battery_ready').length;
+    console.log(`  ${name.padEnd(38)} median ${ms(median)} ms, p99 ${ms(percentile(times, 99))} ms (${plan.assignments.length} assigned, ${short} short)${growth}`);
+  }
+  console.log('');
 }
 
 async function signIn(role) {
@@ -103,7 +169,10 @@ async function benchFanOut(viewer, lead, { clients = 50, writes = 20 } = {}) {
   console.log(`  p50 ${ms(percentile(latencies, 50))} ms   p95 ${ms(percentile(latencies, 95))} ms   p99 ${ms(percentile(latencies, 99))} ms   (${latencies.length} receipts)`);
 }
 
-benchTimeline();
-const viewer = await signIn('viewer');
-await benchReads(viewer.cookie);
-await benchFanOut(viewer, await signIn('lead'));
+if (runs('timeline')) benchTimeline();
+if (runs('plan')) benchPlan();
+if (runs('reads') || runs('fanout')) {
+  const viewer = await signIn('viewer');
+  if (runs('reads')) await benchReads(viewer.cookie);
+  if (runs('fanout')) await benchFanOut(viewer, await signIn('lead'));
+}

@@ -11,6 +11,12 @@ import { requireAuth } from './auth/require-auth';
 import { SessionStore } from './auth/session-store';
 import { apiNotFound, errorHandler } from './middleware/error-handler';
 import { initModels } from './models';
+import { batteriesRouter } from './routes/batteries';
+import { batteryPlanRouter } from './routes/battery-plan';
+import { batterySettingsRouter } from './routes/battery-settings';
+import { batteryInstallsRouter, batteryUsesRouter } from './routes/battery-uses';
+import { chargersRouter } from './routes/chargers';
+import { batteryChargingRouter, chargingSessionsRouter } from './routes/charging-sessions';
 import { checklistRunsRouter, eventChecklistRunsRouter } from './routes/checklist-runs';
 import { checklistTemplatesRouter } from './routes/checklist-templates';
 import { eventsRouter } from './routes/events';
@@ -64,16 +70,25 @@ export function createApp({ config, sequelize }: { config: Config; sequelize: Se
   api.use(csrf.csrfSynchronisedProtection);
   api.use('/session', sessionRouter({ passport, csrf, cookieName: SESSION_COOKIE }));
   api.use('/team/screens', requireAuth, screensRouter());
+  api.use('/team/battery-settings', requireAuth, batterySettingsRouter());
   api.use('/team', requireAuth, teamRouter());
   // The event's areas before the events router, so that requireAuth runs once per request.
   api.use('/events/:eventId/matches', requireAuth, eventMatchesRouter());
   api.use('/events/:eventId/field-progress', requireAuth, fieldProgressRouter());
   api.use('/events/:eventId/timeline', requireAuth, timelineRouter());
   api.use('/events/:eventId/checklist-runs', requireAuth, eventChecklistRunsRouter());
+  api.use('/events/:eventId/battery-plan', requireAuth, batteryPlanRouter());
   api.use('/events', requireAuth, eventsRouter());
   api.use('/matches', requireAuth, matchesRouter());
   api.use('/checklist-templates', requireAuth, checklistTemplatesRouter());
   api.use('/checklist-runs', requireAuth, checklistRunsRouter());
+  // A battery's uses and charging before the batteries router, as for the event's areas above.
+  api.use('/batteries/:id/uses', requireAuth, batteryInstallsRouter());
+  api.use('/batteries/:id/charging', requireAuth, batteryChargingRouter());
+  api.use('/batteries', requireAuth, batteriesRouter());
+  api.use('/battery-uses', requireAuth, batteryUsesRouter());
+  api.use('/chargers', requireAuth, chargersRouter());
+  api.use('/charging-sessions', requireAuth, chargingSessionsRouter());
   api.use(apiNotFound);
   app.use('/api', api);
 

@@ -1,4 +1,10 @@
 import type { Sequelize } from 'sequelize';
+import { Battery } from './battery';
+import { BatteryReading } from './battery-reading';
+import { BatterySetting } from './battery-setting';
+import { BatteryUse } from './battery-use';
+import { Charger } from './charger';
+import { ChargingSession } from './charging-session';
 import { ChecklistItemState, decodeMarkValue, encodeMarkValue } from './checklist-item-state';
 import { ChecklistMark } from './checklist-mark';
 import { ChecklistRun } from './checklist-run';
@@ -15,6 +21,7 @@ import { User } from './user';
 
 export { Event, FieldMark, Match, Membership, ScreenToken, SessionRecord, Team, User };
 export { ChecklistItemState, ChecklistMark, ChecklistRun, ChecklistTemplate, ChecklistTemplateVersion };
+export { Battery, BatteryReading, BatterySetting, BatteryUse, Charger, ChargingSession };
 export { decodeMarkValue, encodeMarkValue, hashScreenToken, newScreenToken };
 
 let boundTo: Sequelize | undefined;
@@ -26,7 +33,8 @@ export function initModels(sequelize: Sequelize) {
   boundTo = sequelize;
   const models = [Team, User, Membership, Event, SessionRecord, Match, FieldMark, ScreenToken];
   const checklistModels = [ChecklistTemplate, ChecklistTemplateVersion, ChecklistRun, ChecklistItemState, ChecklistMark];
-  for (const model of [...models, ...checklistModels]) model.initModel(sequelize);
+  const batteryModels = [Battery, BatteryReading, BatteryUse, Charger, ChargingSession, BatterySetting];
+  for (const model of [...models, ...checklistModels, ...batteryModels]) model.initModel(sequelize);
   Membership.belongsTo(Team, { foreignKey: 'teamId', as: 'team' });
   Membership.belongsTo(User, { foreignKey: 'userId', as: 'user' });
   Team.hasMany(Membership, { foreignKey: 'teamId', as: 'memberships' });
@@ -42,4 +50,10 @@ export function initModels(sequelize: Sequelize) {
   ChecklistRun.belongsTo(Event, { foreignKey: 'eventId', as: 'event' });
   ChecklistRun.belongsTo(ChecklistTemplate, { foreignKey: 'templateId', as: 'template' });
   ChecklistRun.belongsTo(ChecklistTemplateVersion, { foreignKey: 'templateVersionId', as: 'templateVersion' });
+  Battery.belongsTo(Team, { foreignKey: 'teamId', as: 'team' });
+  BatteryReading.belongsTo(Battery, { foreignKey: 'batteryId', as: 'battery' });
+  BatteryUse.belongsTo(Battery, { foreignKey: 'batteryId', as: 'battery' });
+  Charger.belongsTo(Team, { foreignKey: 'teamId', as: 'team' });
+  ChargingSession.belongsTo(Battery, { foreignKey: 'batteryId', as: 'battery' });
+  ChargingSession.belongsTo(Charger, { foreignKey: 'chargerId', as: 'charger' });
 }

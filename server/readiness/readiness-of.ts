@@ -1,8 +1,9 @@
-import type { Transaction } from 'sequelize';
+import { Op, type Transaction } from 'sequelize';
 import { computeReadiness, type ReadinessFacts, type ReadinessJson } from '../../shared/domain/readiness';
 import { computeTimeline } from '../../shared/domain/timeline';
+import { settingsOf, socIn } from '../batteries/settings';
 import { HttpError, notFound } from '../errors';
-import { ChecklistRun, type Event } from '../models';
+import { Battery, BatteryReading, BatteryUse, ChecklistRun, type Event } from '../models';
 import { presentRuns } from '../presenters/checklist';
 import { timelineSettingsOf } from '../presenters/event';
 import { presentSchedule } from '../presenters/match';
@@ -24,9 +25,36 @@ export async function readinessOf(event: Event, matchId: string, now: Date, tran
     await ChecklistRun.findAll({ where: { eventId: event.id, matchId }, order: [['createdAt', 'ASC'], ['id', 'ASC']], transaction }),
     transaction,
   );
+  const battery = await batteryFactOf(event, matchId, transaction);
   const facts: ReadinessFacts = {
     match: { id: matchId, alliance: row.alliance, queueAt },
     preMatchRuns: runs.filter((run) => run.phase === 'pre_match'),
+    ...(battery ? { battery } : {}),
   };
   return computeReadiness(facts, now);
+}
+
+/**
+ * The battery in the robot for the match (an open use) with the charge of its latest reading, and
+ * the team's minimum. Left out for a team with no battery in service: it does not track batteries.
+ */
+async function batteryFactOf(event: Event, matchId: string, transaction?: Transaction): Promise<ReadinessFacts['battery']> {
+  const teamId = event.teamId;
+  if ((await Battery.count({ where: { teamId, status: { [Op.ne]: 'retired' } }, transaction })) === 0) return undefined;
+  const settings = await settingsOf(teamId, transaction);
+  const use = await BatteryUse.findOne({
+    where: { matchId, removedAt: null },
+    include: [{ model: Battery, as: 'battery', where: { teamId }, attributes: ['label'] }],
+    transaction,
+  });
+  if (!use?.battery) return { installed: null, minimumChargePercent: settings.minimumStartChargePercent };
+  const latest = await BatteryReading.findOne({
+    where: { batteryId: use.batteryId },
+    order: [['takenAt', 'DESC'], ['createdAt', 'DESC'], ['id', 'DESC']],
+    transaction,
+  });
+  return {
+    installed: { label: use.battery.label, stateOfChargePercent: latest ? socIn(settings)(latest.voltage) : null },
+    minimumChargePercent: settings.minimumStartChargePercent,
+  };
 }

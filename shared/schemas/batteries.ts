@@ -97,6 +97,7 @@ export type CreateChargerInput = z.output<typeof createChargerSchema>;
 export const startChargingSchema = z.object({ id: clientId.optional(), chargerId: uuid, bay: wholeIn(1, 12, 'Bay') }).strict();
 export type StartChargingInput = z.output<typeof startChargingSchema>;
 export const endChargingSchema = z.object({ endedAt: instantField }).strict();
+export type EndChargingInput = z.output<typeof endChargingSchema>;
 
 export const batterySettingsSchema = z
   .object({
@@ -119,7 +120,12 @@ export const batterySettingsSchema = z
     }
   });
 
+export type BatterySettingsInput = z.output<typeof batterySettingsSchema>;
+
 export const batteryParams = z.object({ id: uuid });
+/** `/api/battery-uses/:id` and `/api/charging-sessions/:id`. */
+export const useParams = z.object({ id: uuid });
+export const chargingSessionParams = z.object({ id: uuid });
 export const planQuery = z.object({ at: instantField.optional() });
 
 export interface PersonRef {

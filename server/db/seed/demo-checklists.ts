@@ -5,6 +5,7 @@ import type { Role } from '../../../shared/roles';
 import { createTemplateSchema, type CreateTemplateInput } from '../../../shared/schemas/checks';
 import { createItemStates, recordMark } from '../../commands/item-states';
 import { itemsWithIds } from '../../commands/template-items';
+import { LAST_MATCH_AFTER_VOLTS } from './demo-batteries';
 import {
   ChecklistRun,
   ChecklistTemplate,
@@ -149,7 +150,7 @@ export async function seedDemoChecklists(
     if (backAt < now) {
       const after = await run('After every match', played.id, backAt, users.crew);
       await after.mark('Battery out and on a charger', true, users.crew, backAt);
-      await after.mark('Battery voltage as it came off', 12.1, users.crew, backAt);
+      await after.mark('Battery voltage as it came off', LAST_MATCH_AFTER_VOLTS, users.crew, backAt);
       await after.mark('Walk-around for damage', true, users.crew, backAt, 'Left intake bracket slightly bent');
     }
   }
