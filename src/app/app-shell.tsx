@@ -52,11 +52,16 @@ export function AppShell() {
       >
         Skip to content
       </a>
-      <AppHeader memberships={session.memberships} liveStatus={liveStatus} />
-      <OfflineBanner />
+      {/* On paper (printed battery labels) only the page itself shows. */}
+      <div className="contents print:hidden">
+        <AppHeader memberships={session.memberships} liveStatus={liveStatus} />
+        <OfflineBanner />
+      </div>
       <div className="mx-auto flex w-full max-w-screen-2xl">
-        <AppNav />
-        <main id="main" className="min-w-0 flex-1 px-4 pt-6 pb-32 sm:px-6 lg:px-8 lg:pb-12">
+        <div className="contents print:hidden">
+          <AppNav />
+        </div>
+        <main id="main" className="min-w-0 flex-1 px-4 pt-6 pb-32 sm:px-6 lg:px-8 lg:pb-12 print:p-0">
           <Outlet />
         </main>
       </div>

@@ -9,16 +9,20 @@ export type LiveStatus = 'live' | 'reconnecting' | 'offline';
 // Server events (`area:verb`) → the query keys they make stale. Events carry ids only; the
 // queries refetch what each screen shows.
 // Readiness reads the checks and the schedule (alliance, queue time): changes to either make it stale.
+// The battery plan reads the schedule's queue times too, and readiness reads the installed battery.
 const CHECK_RUNS = [['checklist-runs'], ['checklist-run'], ['readiness']];
+const BATTERIES = [['batteries'], ['battery'], ['chargers'], ['battery-settings'], ['battery-plan'], ['readiness']];
 const STALE_AFTER: Record<string, string[][]> = {
-  'events:updated': [['events'], ['team'], ['readiness']],
-  'matches:imported': [['matches'], ['timeline'], ['readiness']],
-  'matches:updated': [['matches'], ['timeline'], ['readiness']],
-  'field:progressed': [['matches'], ['timeline'], ['readiness']],
+  'events:updated': [['events'], ['team'], ['readiness'], ['battery-plan']],
+  'matches:imported': [['matches'], ['timeline'], ['readiness'], ['battery-plan']],
+  'matches:updated': [['matches'], ['timeline'], ['readiness'], ['battery-plan']],
+  'field:progressed': [['matches'], ['timeline'], ['readiness'], ['battery-plan']],
   'checks:templates-changed': [['checklist-templates'], ['checklist-template']],
   'checks:run-started': CHECK_RUNS,
   'checks:marked': CHECK_RUNS,
   'checks:signed-off': CHECK_RUNS,
+  'batteries:changed': BATTERIES,
+  'batteries:used': BATTERIES,
 };
 
 /**

@@ -1,6 +1,7 @@
 import type { EventJson } from '@shared/schemas/events';
 import { ErrorNotice } from '../../components/ui/error-notice';
 import { Loading } from '../../components/ui/loading';
+import { NextMatchBattery } from '../../features/batteries/components/plan/next-match-battery';
 import { BoardPage } from '../../features/board/components/board-page';
 import { NextMatchPanel } from '../../features/board/components/next-match-panel';
 import { NextMatchReadiness } from '../../features/checks/components/match-readiness';
@@ -8,7 +9,7 @@ import { useEvents } from '../../features/events/api/get-events';
 import { useMatches } from '../../features/schedule/api/get-matches';
 import { useTimeline } from '../../features/schedule/api/get-timeline';
 
-/** The schedule feature's data, and the checks feature's readiness, fed into the board's next-match panel. */
+/** The schedule feature's data, the checks feature's readiness and the batteries feature's plan, fed into the board's next-match panel. */
 function NextMatch({ event }: { event: EventJson }) {
   const timeline = useTimeline(event.id);
   const matches = useMatches(event.id);
@@ -19,11 +20,12 @@ function NextMatch({ event }: { event: EventJson }) {
       teamNumber={event.teamNumber}
       timeZone={event.timeZone}
       readinessOf={(matchId) => <NextMatchReadiness key={matchId} eventId={event.id} matchId={matchId} />}
+      batteryOf={(matchId) => <NextMatchBattery key={matchId} eventId={event.id} matchId={matchId} timeZone={event.timeZone} />}
     />
   );
 }
 
-/** Feeds the events, schedule and checks features' data into the board, which must not import another feature. */
+/** Feeds the events, schedule, checks and batteries features' data into the board, which must not import another feature. */
 export function BoardRoute() {
   const events = useEvents();
   if (events.isPending) return <Loading label="Loading the board" />;

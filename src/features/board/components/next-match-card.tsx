@@ -48,13 +48,15 @@ function Clock({ label, at, timeZone, now, loud }: { label: ReactNode; at: strin
   );
 }
 
-export function NextMatchCard({ match, teams, teamNumber, timeZone, readiness }: {
+export function NextMatchCard({ match, teams, teamNumber, timeZone, readiness, battery }: {
   match: OurMatchJson;
   teams: MatchTeams | undefined;
   teamNumber: number;
   timeZone: string;
   /** Whether the robot is ready for it, and the checklist progress: filled by the route from the checks feature. */
   readiness?: ReactNode;
+  /** The battery planned for it and whether it is in the robot: filled by the route from the batteries feature. */
+  battery?: ReactNode;
 }) {
   const now = useServerNow(1000);
   const queueSoon = isQueueSoon(match.queueAt, now);
@@ -98,6 +100,8 @@ export function NextMatchCard({ match, teams, teamNumber, timeZone, readiness }:
       </div>
       {/* After the countdowns (what the whole pit times itself by), before the turnaround. */}
       {readiness && <div className="px-5 pb-5 sm:px-6 sm:pb-6">{readiness}</div>}
+      {/* Empty for a team that does not track batteries: then no gap either. */}
+      {battery && <div className="px-5 pb-5 empty:hidden sm:px-6 sm:pb-6">{battery}</div>}
       <div className="flex flex-wrap items-center gap-3 border-t border-line px-5 py-4 text-lg sm:px-6">
         <span className="font-semibold text-ink-muted">Turnaround before it:</span>
         {match.turnaroundMinutes === null ? (

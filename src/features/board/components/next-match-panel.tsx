@@ -14,6 +14,8 @@ interface NextMatchPanelProps {
   timeZone: string;
   /** Readiness of the next match, given its id (the route builds it from the checks feature). */
   readinessOf?: (matchId: string) => ReactNode;
+  /** The battery planned for the next match, given its id (the route builds it from the batteries feature). */
+  batteryOf?: (matchId: string) => ReactNode;
 }
 
 function Empty({ icon, title, children }: { icon: ReactNode; title: string; children: ReactNode }) {
@@ -27,7 +29,7 @@ function Empty({ icon, title, children }: { icon: ReactNode; title: string; chil
 }
 
 /** The top of the board: our next match, loudly, then the rest of ours. */
-export function NextMatchPanel({ timeline, matches, teamNumber, timeZone, readinessOf }: NextMatchPanelProps) {
+export function NextMatchPanel({ timeline, matches, teamNumber, timeZone, readinessOf, batteryOf }: NextMatchPanelProps) {
   if (timeline.isPending) return <Loading label="Loading our next match" />;
   if (timeline.isError) {
     return (
@@ -64,7 +66,14 @@ export function NextMatchPanel({ timeline, matches, teamNumber, timeZone, readin
   const teams = matches.data?.find((match) => match.id === next.matchId);
   return (
     <div className="flex flex-col gap-4">
-      <NextMatchCard match={next} teams={teams} teamNumber={teamNumber} timeZone={timeZone} readiness={readinessOf?.(next.matchId)} />
+      <NextMatchCard
+        match={next}
+        teams={teams}
+        teamNumber={teamNumber}
+        timeZone={timeZone}
+        readiness={readinessOf?.(next.matchId)}
+        battery={batteryOf?.(next.matchId)}
+      />
       {matches.isError && (
         <ErrorNotice
           title="Could not load partners and opponents"

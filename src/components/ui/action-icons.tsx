@@ -1,0 +1,51 @@
+import type { SVGProps } from 'react';
+
+type IconProps = SVGProps<SVGSVGElement>;
+
+// Same drawing rules as icons.tsx: always beside a word, so hidden from assistive technology.
+function Icon({ children, className = 'size-6', ...props }: IconProps) {
+  return (
+    <svg
+      viewBox="0 0 24 24"
+      fill="none"
+      stroke="currentColor"
+      strokeWidth={2}
+      strokeLinecap="round"
+      strokeLinejoin="round"
+      aria-hidden="true"
+      focusable="false"
+      className={`shrink-0 ${className}`}
+      {...props}
+    >
+      {children}
+    </svg>
+  );
+}
+
+/** A charger: a plug with its lead. */
+export const PlugIcon = (p: IconProps) => (
+  <Icon {...p}>
+    <path d="M9 3v5M15 3v5M6 8h12v3a6 6 0 0 1-12 0V8zM12 17v4" />
+  </Icon>
+);
+
+export const PrintIcon = (p: IconProps) => (
+  <Icon {...p}>
+    <path d="M7 9V3h10v6M7 17H5a2 2 0 0 1-2-2v-4a2 2 0 0 1 2-2h14a2 2 0 0 1 2 2v4a2 2 0 0 1-2 2h-2" />
+    <rect x="7" y="14" width="10" height="7" rx="1" />
+  </Icon>
+);
+
+/** Into the robot: an arrow down into a tray. */
+export const InstallIcon = (p: IconProps) => (
+  <Icon {...p}>
+    <path d="M12 3v11M7 9l5 5 5-5M4 17v3h16v-3" />
+  </Icon>
+);
+
+/** Out of the robot (or off a charger): an arrow up out of a tray. */
+export const TakeOutIcon = (p: IconProps) => (
+  <Icon {...p}>
+    <path d="M12 14V3M7 8l5-5 5 5M4 17v3h16v-3" />
+  </Icon>
+);
