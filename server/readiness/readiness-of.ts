@@ -1,9 +1,11 @@
-import { Op, type Transaction } from 'sequelize';
+import type { Transaction } from 'sequelize';
 import { computeReadiness, type ReadinessFacts, type ReadinessJson } from '../../shared/domain/readiness';
 import { computeTimeline } from '../../shared/domain/timeline';
-import { settingsOf, socIn } from '../batteries/settings';
+import { chargeOf, fleetDraw } from '../batteries/fleet-charge';
+import { fleetRecords } from '../batteries/fleet-records';
+import { settingsOf } from '../batteries/settings';
 import { HttpError, notFound } from '../errors';
-import { Battery, BatteryReading, BatteryUse, ChecklistRun, type Event } from '../models';
+import { Battery, BatteryUse, ChecklistRun, type Event } from '../models';
 import { presentRuns } from '../presenters/checklist';
 import { timelineSettingsOf } from '../presenters/event';
 import { presentSchedule } from '../presenters/match';
@@ -25,7 +27,7 @@ export async function readinessOf(event: Event, matchId: string, now: Date, tran
     await ChecklistRun.findAll({ where: { eventId: event.id, matchId }, order: [['createdAt', 'ASC'], ['id', 'ASC']], transaction }),
     transaction,
   );
-  const battery = await batteryFactOf(event, matchId, transaction);
+  const battery = await batteryFactOf(event, matchId, now, transaction);
   const facts: ReadinessFacts = {
     match: { id: matchId, alliance: row.alliance, queueAt },
     preMatchRuns: runs.filter((run) => run.phase === 'pre_match'),
@@ -35,26 +37,26 @@ export async function readinessOf(event: Event, matchId: string, now: Date, tran
 }
 
 /**
- * The battery in the robot for the match (an open use) with the charge of its latest reading, and
- * the team's minimum. Left out for a team with no battery in service: it does not track batteries.
+ * The battery in the robot for the match (an open use) with its estimated charge now (the same
+ * estimate the rotation plan reads: its latest reading, less the matches since, full after a
+ * finished charge), and the team's minimum. Left out for a team with no battery in service.
  */
-async function batteryFactOf(event: Event, matchId: string, transaction?: Transaction): Promise<ReadinessFacts['battery']> {
+async function batteryFactOf(event: Event, matchId: string, now: Date, transaction?: Transaction): Promise<ReadinessFacts['battery']> {
   const teamId = event.teamId;
-  if ((await Battery.count({ where: { teamId, status: { [Op.ne]: 'retired' } }, transaction })) === 0) return undefined;
+  const batteries = await Battery.findAll({ where: { teamId }, transaction });
+  const inService = batteries.filter((battery) => battery.status !== 'retired');
+  if (inService.length === 0) return undefined;
   const settings = await settingsOf(teamId, transaction);
-  const use = await BatteryUse.findOne({
-    where: { matchId, removedAt: null },
-    include: [{ model: Battery, as: 'battery', where: { teamId }, attributes: ['label'] }],
+  const use = await BatteryUse.findOne({ where: { matchId, removedAt: null, batteryId: batteries.map((battery) => battery.id) }, transaction });
+  const installed = use && batteries.find((battery) => battery.id === use.batteryId);
+  if (!installed) return { installed: null, minimumChargePercent: settings.minimumStartChargePercent };
+  const records = await fleetRecords(
+    batteries.map((battery) => battery.id),
     transaction,
-  });
-  if (!use?.battery) return { installed: null, minimumChargePercent: settings.minimumStartChargePercent };
-  const latest = await BatteryReading.findOne({
-    where: { batteryId: use.batteryId },
-    order: [['takenAt', 'DESC'], ['createdAt', 'DESC'], ['id', 'DESC']],
-    transaction,
-  });
+  );
+  const { percent: drawPercent } = fleetDraw({ batteries, records, event, settings });
   return {
-    installed: { label: use.battery.label, stateOfChargePercent: latest ? socIn(settings)(latest.voltage) : null },
+    installed: { label: installed.label, stateOfChargePercent: chargeOf(installed, records, { at: now, drawPercent, settings }) },
     minimumChargePercent: settings.minimumStartChargePercent,
   };
 }
