@@ -27,6 +27,10 @@ const HALF_HOUR = 30 * 60_000;
 
 const timeOnly = new Intl.DateTimeFormat(undefined, { hour: 'numeric', minute: '2-digit' });
 const dayAndTime = new Intl.DateTimeFormat(undefined, { weekday: 'short', hour: 'numeric', minute: '2-digit' });
+// Over a week a weekday repeats and would name two days alike: the date says which.
+const dateOnly = new Intl.DateTimeFormat(undefined, { month: 'short', day: 'numeric' });
+const dateAndTime = new Intl.DateTimeFormat(undefined, { month: 'short', day: 'numeric', hour: 'numeric', minute: '2-digit' });
+const WEEK = 7 * 24 * 60 * 60_000;
 
 /**
  * A rested reading is a filled dot; one without 4 h of rest a hollow diamond, larger, in the
@@ -43,7 +47,7 @@ function ReadingTooltip({ active, payload }: TooltipContentProps<TooltipValueTyp
   if (!point) return null;
   return (
     <div className="rounded-lg border border-line-strong bg-surface px-3 py-2 text-sm text-ink shadow-md">
-      <p className="font-semibold">{dayAndTime.format(point.at)}</p>
+      <p className="font-semibold">{dateAndTime.format(point.at)}</p>
       <p className="tabular-nums">
         {formatVolts(point.volts)} · {formatMilliohm(point.milliohm)} · {formatPercent(point.percent)}
       </p>
@@ -64,6 +68,7 @@ function TrendChart({ title, points, dataKey, lines, formatValue }: {
   // One reading, or several in the same minute: give the axis some width to draw in.
   const timeDomain = last - first < HALF_HOUR ? [first - HALF_HOUR, last + HALF_HOUR] : [first, last];
   const spansDays = new Date(timeDomain[0]).toDateString() !== new Date(timeDomain[1]).toDateString();
+  const axisFormat = timeDomain[1] - timeDomain[0] >= WEEK ? dateOnly : spansDays ? dayAndTime : timeOnly;
 
   return (
     <figure className="flex min-w-0 flex-col gap-2">
@@ -79,7 +84,7 @@ function TrendChart({ title, points, dataKey, lines, formatValue }: {
             tickCount={4}
             tick={tick}
             stroke="var(--color-line-strong)"
-            tickFormatter={(at: number) => (spansDays ? dayAndTime : timeOnly).format(at)}
+            tickFormatter={(at: number) => axisFormat.format(at)}
           />
           {/* Round ticks around the readings, widened to take in every threshold line (extendDomain below). */}
           <YAxis domain={['auto', 'auto']} tick={tick} width={52} stroke="var(--color-line-strong)" tickFormatter={formatValue} />

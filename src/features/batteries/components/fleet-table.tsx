@@ -68,7 +68,14 @@ export function FleetTable({ batteries, now }: { batteries: BatteryJson[]; now: 
                     onClick={() => setSort((current) => nextFleetSort(current, column))}
                     className={`flex min-h-12 w-full items-center gap-1 px-2 py-2 text-left leading-tight hover:bg-line/50 ${sorted ? 'font-bold text-ink' : 'font-semibold text-ink-muted'}`}
                   >
-                    {HEADINGS[column]}
+                    {column === 'uses' ? (
+                      // Short on screen so the table fits a portrait tablet; read out in full.
+                      <span>
+                        Uses<span className="sr-only"> this event</span>
+                      </span>
+                    ) : (
+                      HEADINGS[column]
+                    )}
                     <SortArrow direction={sorted ? sort.direction : null} />
                   </button>
                 </th>
