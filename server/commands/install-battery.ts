@@ -18,13 +18,13 @@ import { lockTeam, openUseOfTeam } from './battery-guards';
 export async function installBattery(teamId: string, userId: string, batteryId: string, { id, matchId }: CreateUseInput) {
   return inTransaction(async (transaction) => {
     const team = await lockTeam(teamId, transaction);
+    const battery = await Battery.ofTeam(teamId, batteryId, { transaction });
     if (id) {
+      // A resend is for the same battery: an id reused for another one must not answer that one's use.
       const existing = await BatteryUse.findByPk(id, { transaction });
-      const owner = existing ? await Battery.findByPk(existing.batteryId, { attributes: ['id', 'teamId'], transaction }) : null;
-      if (existing && owner?.teamId === teamId) return { use: presentUse(existing), created: false };
+      if (existing?.batteryId === battery.id) return { use: presentUse(existing), created: false };
       if (existing) throw new HttpError(409, 'id_taken', 'This id is already used by another record');
     }
-    const battery = await Battery.ofTeam(teamId, batteryId, { transaction });
     const event = team.currentEventId ? await Event.findByPk(team.currentEventId, { transaction }) : null;
     const match = event ? await Match.findOne({ where: { id: matchId, eventId: event.id }, transaction }) : null;
     if (!event || !match) throw notFound('Match');

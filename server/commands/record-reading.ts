@@ -8,9 +8,6 @@ import { healthOfReadings, presentReading } from '../presenters/battery';
 import { emitToTeam } from '../realtime/broadcast';
 import { assertInstant, invalidField } from './battery-guards';
 
-// What the columns keep: the analyzer's digits, no more.
-const round = (value: number, places: number) => Math.round(value * 10 ** places) / 10 ** places;
-
 /**
  * Logs what the analyzer showed, and answers it with its state of charge and the battery's health
  * after it. Resending the same `id` answers the reading the first call made.
@@ -33,18 +30,19 @@ export async function recordReading(teamId: string, userId: string, batteryId: s
       {
         id: input.id,
         batteryId: battery.id,
-        voltage: round(input.voltage, 3),
-        internalResistanceMilliohm: round(input.internalResistanceMilliohm, 2),
+        // The columns keep the analyzer's digits, no more (see models/decimal.ts).
+        voltage: input.voltage,
+        internalResistanceMilliohm: input.internalResistanceMilliohm,
         rested: input.rested,
         restedMinutes: input.restedMinutes,
-        temperatureC: input.temperatureC === null ? null : round(input.temperatureC, 1),
+        temperatureC: input.temperatureC,
         takenAt,
         takenById: userId,
         useId: input.useId ?? null,
       },
       { transaction },
     );
-    transaction.afterCommit(() => emitToTeam(teamId, 'batteries:changed', { id: battery.id }));
+    transaction.afterCommit(() => emitToTeam(teamId, 'batteries:changed', { id: battery.id }, { withScreens: true }));
     return { reading: await answerOf(battery, reading, transaction), created: true };
   });
 }

@@ -3,7 +3,7 @@ import { inTransaction } from '../db/transaction';
 import { notFound } from '../errors';
 import { Battery, BatteryUse } from '../models';
 import { presentUse } from '../presenters/battery';
-import { emitToEvent } from '../realtime/broadcast';
+import { emitToEvent, emitToTeam } from '../realtime/broadcast';
 import { assertInstant, lockTeam } from './battery-guards';
 
 /**
@@ -21,7 +21,11 @@ export async function removeBattery(teamId: string, userId: string, useId: strin
     const wasOpen = use.removedAt === null;
     await use.update({ removedAt: at, removedById: userId }, { transaction });
     if (wasOpen && battery.status === 'in_robot') await battery.update({ status: 'spent' }, { transaction });
-    transaction.afterCommit(() => emitToEvent(use.eventId, 'batteries:used', { eventId: use.eventId, batteryId: battery.id, matchId: use.matchId }));
+    transaction.afterCommit(() => {
+      emitToEvent(use.eventId, 'batteries:used', { eventId: use.eventId, batteryId: battery.id, matchId: use.matchId });
+      // The use may belong to an event that is no longer current: the fleet lists hear it anyway.
+      emitToTeam(teamId, 'batteries:changed', { id: battery.id });
+    });
     return presentUse(use);
   });
 }

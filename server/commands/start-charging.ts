@@ -20,13 +20,13 @@ const MINUTE_MS = 60_000;
 export async function startCharging(teamId: string, userId: string, batteryId: string, { id, chargerId, bay }: StartChargingInput) {
   return inTransaction(async (transaction) => {
     const team = await lockTeam(teamId, transaction);
+    const battery = await Battery.ofTeam(teamId, batteryId, { transaction });
     if (id) {
+      // A resend is for the same battery: an id reused for another one must not answer that one's session.
       const existing = await ChargingSession.findByPk(id, { transaction });
-      const owner = existing ? await Battery.findByPk(existing.batteryId, { attributes: ['id', 'teamId'], transaction }) : null;
-      if (existing && owner?.teamId === teamId) return { session: presentChargingSession(existing), created: false };
+      if (existing?.batteryId === battery.id) return { session: presentChargingSession(existing), created: false };
       if (existing) throw new HttpError(409, 'id_taken', 'This id is already used by another record');
     }
-    const battery = await Battery.ofTeam(teamId, batteryId, { transaction });
     const charger = await Charger.ofTeam(teamId, chargerId, { transaction });
     if (bay > charger.bays) throw invalidField('bay', `${charger.name} has ${charger.bays === 1 ? '1 bay' : `bays 1 to ${charger.bays}`}`);
     if (battery.status === 'retired') throw new HttpError(409, 'retired', `Battery ${battery.label} is retired: put it back in service before charging it`);

@@ -35,7 +35,7 @@ export async function updateBattery(teamId: string, userId: string, id: string, 
     }
     if (battery.changed()) {
       await battery.save({ transaction });
-      transaction.afterCommit(() => emitToTeam(teamId, 'batteries:changed', { id: battery.id }));
+      transaction.afterCommit(() => emitToTeam(teamId, 'batteries:changed', { id: battery.id }, { withScreens: true }));
     }
     return presentBattery(battery, transaction);
   });

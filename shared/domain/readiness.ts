@@ -37,6 +37,7 @@ export type ReasonCode =
   | 'bumper_mismatch'
   | 'battery_not_installed'
   | 'battery_low'
+  | 'battery_charge_unknown'
   | 'repair_blocks_match'
   | 'queue_call_near'
   | 'queue_call_passed';
@@ -175,7 +176,10 @@ function batteryReasons({ battery }: ReadinessFacts): RuleReason[] {
   const { installed, minimumChargePercent } = battery;
   if (!installed) return [{ code: 'battery_not_installed', level: 'pending', message: 'No battery is recorded as installed for this match' }];
   const charge = installed.stateOfChargePercent;
-  if (charge !== null && charge < minimumChargePercent) {
+  if (charge === null) {
+    return [{ code: 'battery_charge_unknown', level: 'at_risk', message: `Battery ${installed.label} has no reading yet: check its charge before the match` }];
+  }
+  if (charge < minimumChargePercent) {
     return [
       {
         code: 'battery_low',

@@ -47,3 +47,28 @@ it('a TV opens the screen link without signing in, sees the team and our next ma
     await context.close();
   }
 });
+
+it('the pit screen hears a battery go into the robot at once, not at its next minute refresh', async () => {
+  const own = await makeTeam();
+  const ownAdmin = await signIn(harness.app, own.emails.admin, PASSWORD);
+  const ours = await ownAdmin.post(`/api/events/${own.event.id}/matches`, matchBody({ number: 1, scheduledStart: minutesFromNow(30), red: [own.team.number, 21002, 21003] }));
+  expect(ours.status).toBe(201);
+  const battery = await ownAdmin.post('/api/batteries', { label: 'TV', yearInService: 2026 });
+  expect(battery.status).toBe(201);
+  const screen = await ownAdmin.post('/api/team/screens', { name: 'Pit TV' });
+  expect(screen.status).toBe(201);
+
+  const context = await harness.browser.newContext({ viewport: { width: 1920, height: 1080 } });
+  try {
+    const page = await context.newPage();
+    await page.goto(`${harness.baseUrl}/screen/${screen.body.token}`);
+    await page.getByText('Live', { exact: true }).waitFor();
+    const notInstalled = page.getByText('No battery is recorded as installed for this match');
+    await notInstalled.waitFor();
+    expect((await ownAdmin.post(`/api/batteries/${battery.body.id}/uses`, { matchId: ours.body.id })).status).toBe(201);
+    // Well inside the screen's one-minute refresh: only the 'batteries:used' message can do it.
+    await expect.poll(() => notInstalled.count(), { timeout: 10_000 }).toBe(0);
+  } finally {
+    await context.close();
+  }
+});

@@ -79,7 +79,8 @@ describe('buildPlanInput', () => {
     await own.read(e.id, '08:10', 12.7);
     await own.used(e.id, next.id, '08:20', null);
     await Battery.update({ status: 'in_robot' }, { where: { id: e.id } });
-    for (const resistance of [12, 12, 12, 30]) await own.read(f.id, '05:00', 12.5, resistance);
+    // A minute apart: readings of one instant have no order to tell the latest by.
+    for (const [minute, resistance] of [12, 12, 12, 30].entries()) await own.read(f.id, `05:0${minute}`, 12.5, resistance);
     await own.handler.patch(`/api/batteries/${f.id}`, { status: 'retired' });
 
     const input = await buildPlanInput(await Event.findByPk(own.event.id, { rejectOnEmpty: true }), NOW);

@@ -98,6 +98,15 @@ describe('adding a battery', () => {
     expect((await own.handler.get(`/api/batteries/${answer.body.id}`)).body).toEqual({ ...answer.body, readings: [], uses: [] });
   });
 
+  it('answers the capacity as the column keeps it (two decimals), on create and edit, the same as a later read', async () => {
+    const own = await ownTeam();
+    const created = await makeBattery(own.handler, { label: 'ROUND', nominalCapacityAh: 18.555 });
+    expect(created.nominalCapacityAh).toBe(18.56);
+    const edited = await own.handler.patch(`/api/batteries/${created.id}`, { nominalCapacityAh: 17.004 });
+    expect(edited.body.nominalCapacityAh).toBe(17);
+    expect((await own.handler.get(`/api/batteries/${created.id}`)).body).toEqual({ ...edited.body, readings: [], uses: [] });
+  });
+
   it('answers 400 naming each bad field', async () => {
     const cases: [Record<string, unknown>, Record<string, string>][] = [
       [{}, { label: 'Required', yearInService: 'Required' }],

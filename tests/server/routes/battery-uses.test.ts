@@ -184,6 +184,15 @@ describe('installing and taking out', () => {
     expect(foreign.body.error.code).toBe('id_taken');
   });
 
+  it('refuses the id of one battery’s use for another battery (409), rather than answer the first one’s use', async () => {
+    const own = await pit();
+    const first = await install(own.crew, own.full.id, own.match.id);
+    const reused = await own.crew.post(`/api/batteries/${own.half.id}/uses`, { id: first.id, matchId: own.match.id });
+    expect(reused.status).toBe(409);
+    expect(reused.body.error.code).toBe('id_taken');
+    expect((await own.battery(own.half.id)).status).toBe('ready');
+  });
+
   it('a status set by hand takes the battery out of the robot', async () => {
     const own = await pit();
     const use = await install(own.crew, own.full.id, own.match.id);

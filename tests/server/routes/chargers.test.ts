@@ -50,6 +50,14 @@ describe('charger routes', () => {
     expect(((await handler.get('/api/chargers')).body as ChargerJson[]).some((charger) => charger.id === bench.id)).toBe(false);
   });
 
+  it('answers the current per bay as the column keeps it (two decimals), the same as a later read', async () => {
+    const own = await makeTeam();
+    const ownHandler = await signIn(app, own.emails.battery, PASSWORD);
+    const created = await makeCharger(ownHandler, { currentPerBayA: 6.125 });
+    expect(created.currentPerBayA).toBe(6.13);
+    expect((await ownHandler.get('/api/chargers')).body).toEqual([created]);
+  });
+
   it('is idempotent on the client id; an id of another team answers 409 id_taken', async () => {
     const id = randomUUID();
     const first = await handler.post('/api/chargers', chargerBody({ id }));

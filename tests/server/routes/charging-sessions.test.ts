@@ -187,6 +187,12 @@ describe('charging', () => {
     const again = await own.handler.post(`/api/batteries/${battery.id}/charging`, { id, chargerId: own.charger.id, bay: 1 });
     expect(again.status).toBe(200);
     expect(again.body).toEqual(first.body);
+    // The same id for another battery is not a resend: it must not answer the first battery's session.
+    const other = await makeBattery(own.handler, { label: 'OTHER' });
+    const reused = await own.handler.post(`/api/batteries/${other.id}/charging`, { id, chargerId: own.charger.id, bay: 2 });
+    expect(reused.status).toBe(409);
+    expect(reused.body.error.code).toBe('id_taken');
+    expect((await own.battery(other.id)).status).toBe('ready');
   });
 
   it('two tablets filling one bay at once: one battery gets it, the other answers 409', async () => {

@@ -187,9 +187,15 @@ describe('computeReadiness: every reason', () => {
     ]);
   });
 
-  it('a charged battery, or one whose charge is unknown, adds nothing', () => {
+  it('a charged battery adds nothing', () => {
     expect(computeReadiness(facts({ battery: { installed: { label: 'A', stateOfChargePercent: 97 }, minimumChargePercent: 90 } }), NOW).state).toBe('ready');
-    expect(computeReadiness(facts({ battery: { installed: { label: 'A', stateOfChargePercent: null }, minimumChargePercent: 90 } }), NOW).state).toBe('ready');
+  });
+
+  it('a battery whose charge is unknown (never read nor charged) is at risk, whatever the clock', () => {
+    const unknown = { battery: { installed: { label: 'A', stateOfChargePercent: null }, minimumChargePercent: 90 } };
+    const reasons = [{ code: 'battery_charge_unknown', level: 'at_risk', message: 'Battery A has no reading yet: check its charge before the match' }];
+    expect(computeReadiness(facts(unknown), NOW).reasons).toEqual(reasons);
+    expect(computeReadiness(facts(unknown, -5), NOW).reasons).toEqual(reasons);
   });
 
   it('an open repair that blocks the match is not ready, named', () => {

@@ -14,6 +14,10 @@ const REFETCH_ON = [
   'checks:run-started',
   'checks:marked',
   'checks:signed-off',
+  // A battery in or out of the robot changes the next match's readiness (ids only; no names).
+  'batteries:used',
+  // A reading or a retirement can change whether the installed battery is charged enough.
+  'batteries:changed',
 ];
 
 /**

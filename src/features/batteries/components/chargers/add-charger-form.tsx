@@ -7,10 +7,9 @@ import { TextField } from '../../../../components/ui/field';
 import { mergeFieldErrors, parseForm, type FieldErrors } from '../../../../lib/form-errors';
 import { newId } from '../../../../lib/new-id';
 import { useCreateCharger } from '../../api/create-charger';
+import { readDecimal } from '../read-decimal';
 
 // `Number('')` is 0: an emptied field must be refused, not saved as zero. Some keypads type "6,5".
-const numberOf = (text: string) => (/^\s*\d+([.,]\d+)?\s*$/.test(text) ? Number(text.replace(',', '.')) : NaN);
-
 /** "Add a charger": its name, how many bays, and the current each bay charges at. */
 export function AddChargerForm({ onDone }: { onDone: () => void }) {
   const create = useCreateCharger();
@@ -24,7 +23,7 @@ export function AddChargerForm({ onDone }: { onDone: () => void }) {
 
   function submit(event: FormEvent) {
     event.preventDefault();
-    const parsed = parseForm(createChargerSchema, { id, name, bays: numberOf(bays), currentPerBayA: numberOf(amps) });
+    const parsed = parseForm(createChargerSchema, { id, name, bays: readDecimal(bays), currentPerBayA: readDecimal(amps) });
     setClientErrors(parsed.ok ? {} : parsed.errors);
     if (!parsed.ok) return;
     create.mutate({ ...parsed.data, id }, { onSuccess: onDone });

@@ -18,9 +18,8 @@ import { bayName } from './bays';
 
 /** When the charge should be done: a countdown (the server's clock) and the wall-clock time. */
 function DoneBy({ session, timeZone, now }: { session: ChargingSessionJson; timeZone: string; now: Date }) {
-  if (!session.expectedEndAt) {
-    return <p className="text-ink-muted">Done time unknown: log a reading to get one.</p>;
-  }
+  // The server sets it for every session it starts; a session from before it did has none.
+  if (!session.expectedEndAt) return <p className="text-ink-muted">Done time not known</p>;
   const done = Date.parse(session.expectedEndAt) <= now.getTime();
   return (
     <div className="flex flex-col">
