@@ -9,10 +9,11 @@ import type {
   ReadingJson,
   UseJson,
 } from '../../shared/schemas/batteries';
-import { fleetRecords, type FleetRecords } from '../batteries/fleet-records';
 import { onePlace } from '../batteries/charge-estimate';
+import { chargeOf, fleetDraw } from '../batteries/fleet-charge';
+import { fleetRecords, type FleetRecords } from '../batteries/fleet-records';
 import { settingsOf, socIn } from '../batteries/settings';
-import { Team, User, type Battery, type BatteryReading, type BatteryUse, type Charger, type ChargingSession } from '../models';
+import { Battery, Event, Team, User, type BatteryReading, type BatteryUse, type Charger, type ChargingSession } from '../models';
 
 type People = Map<string, PersonRef>;
 
@@ -79,9 +80,12 @@ interface Context {
   currentEventId: string | null;
   records: FleetRecords;
   people: People;
+  /** The moment the estimates are for, and one match's draw at the current event. */
+  now: Date;
+  drawPercent: number;
 }
 
-function present(battery: Battery, { settings, currentEventId, records, people }: Context): BatteryJson {
+function present(battery: Battery, { settings, currentEventId, records, people, now, drawPercent }: Context): BatteryJson {
   const readings = records.readingsOf(battery.id);
   const uses = records.usesOf(battery.id);
   const latest = readings.at(-1);
@@ -97,6 +101,7 @@ function present(battery: Battery, { settings, currentEventId, records, people }
     status: battery.status,
     health: healthOfReadings(readings, settings),
     latestReading: latest ? presentReading(latest, people, settings) : null,
+    estimatedChargePercent: chargeOf(battery, records, { at: now, drawPercent, settings }),
     // When it last came out of the robot, or went in while it is still there.
     lastUsedAt: lastUse ? (lastUse.removedAt ?? lastUse.installedAt).toISOString() : null,
     usesThisEvent: currentEventId === null ? 0 : uses.filter((use) => use.eventId === currentEventId).length,
@@ -105,21 +110,29 @@ function present(battery: Battery, { settings, currentEventId, records, people }
   };
 }
 
-/** Batteries of one team with their health, latest reading and charging, in a handful of queries. */
+/**
+ * Batteries of one team with their health, latest reading, estimated charge and charging, in a
+ * handful of queries. The draw is the whole fleet's at the current event, as the plan and
+ * readiness compute it, so a battery shown alone has the same estimate as in the list.
+ */
 async function contextOf(batteries: readonly Battery[], { allReadings }: { allReadings: boolean }, transaction?: Transaction): Promise<Context> {
+  const now = new Date();
   const teamId = batteries[0].teamId;
   const settings = await settingsOf(teamId, transaction);
   const team = await Team.findByPk(teamId, { attributes: ['id', 'currentEventId'], transaction, rejectOnEmpty: true });
+  const fleet = await Battery.findAll({ where: { teamId }, transaction });
   const records = await fleetRecords(
-    batteries.map((battery) => battery.id),
+    fleet.map((battery) => battery.id),
     transaction,
   );
+  const event = team.currentEventId ? await Event.findByPk(team.currentEventId, { transaction }) : null;
+  const { percent: drawPercent } = fleetDraw({ batteries: fleet, records, event, settings });
   const shown = batteries.flatMap((battery) => (allReadings ? records.readingsOf(battery.id) : records.readingsOf(battery.id).slice(-1)));
   const people = await peopleOf(
     shown.map((reading) => reading.takenById),
     transaction,
   );
-  return { settings, currentEventId: team.currentEventId, records, people };
+  return { settings, currentEventId: team.currentEventId, records, people, now, drawPercent };
 }
 
 export async function presentBatteries(batteries: readonly Battery[], transaction?: Transaction): Promise<BatteryJson[]> {

@@ -164,6 +164,12 @@ export interface BatteryJson {
   status: BatteryStatus;
   health: HealthJson;
   latestReading: ReadingJson | null;
+  /**
+   * Its charge now (0–100, one decimal) by the estimate the plan and readiness read: the latest
+   * reading, less a match's draw for each use since, full again after a finished charge. Null when
+   * it was never read nor charged.
+   */
+  estimatedChargePercent: number | null;
   lastUsedAt: string | null;
   /** Matches it went into at the team's current event. */
   usesThisEvent: number;

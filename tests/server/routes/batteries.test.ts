@@ -84,6 +84,7 @@ describe('adding a battery', () => {
       status: 'ready',
       health: NO_HEALTH,
       latestReading: null,
+      estimatedChargePercent: null,
       lastUsedAt: null,
       usesThisEvent: 0,
       charging: null,

@@ -1,6 +1,7 @@
 import { randomUUID } from 'node:crypto';
 import request from 'supertest';
 import { describe, expect, it } from 'vitest';
+import { BATTERY_DEFAULTS, modelledMatchDrawPercent } from '../../../shared/domain/battery-state';
 import { ROLES, type Role } from '../../../shared/roles';
 import type { BatteryJson, UseJson } from '../../../shared/schemas/batteries';
 import { BatteryUse } from '../../../server/models';
@@ -94,6 +95,27 @@ describe('installing and taking out', () => {
     expect(after).toMatchObject({ status: 'spent', version: 2, usesThisEvent: 1, lastUsedAt: removedAt });
     expect(after.uses).toEqual([removed.body]);
     expect(await own.readiness()).toEqual({ matchId: own.match.id, state: 'at_risk', reasons: [MISSING_CHECK, NOT_INSTALLED] });
+  });
+
+  it('after a match the estimated charge is one match’s draw below its last reading, which still says 100 %', async () => {
+    const own = await pit();
+    const listed = async (id: string) => ((await own.crew.get('/api/batteries')).body as BatteryJson[]).find((battery) => battery.id === id)!;
+    const use = await install(own.crew, own.full.id, own.match.id);
+    expect(await listed(own.full.id)).toMatchObject({ status: 'in_robot', estimatedChargePercent: 100 });
+    expect((await own.crew.patch(`/api/battery-uses/${use.id}`, { removedAt: nowIso() })).status).toBe(200);
+
+    // No reading after the match, so the draw is modelled: Peukert (REFERENCES §3) for the event's
+    // match length at the fleet's 18 Ah and the default settings.
+    const draw = modelledMatchDrawPercent(18, own.event.matchLengthSeconds, BATTERY_DEFAULTS);
+    const full = await listed(own.full.id);
+    expect(full.status).toBe('spent');
+    expect(full.latestReading?.stateOfChargePercent).toBe(100);
+    expect(full.estimatedChargePercent).toBe(Math.round((100 - draw) * 10) / 10);
+    expect(full.estimatedChargePercent).toBeLessThan(100);
+    expect((await own.battery(own.full.id)).estimatedChargePercent).toBe(full.estimatedChargePercent);
+    // A battery with nothing since its reading is estimated at that reading.
+    const half = await listed(own.half.id);
+    expect(half.estimatedChargePercent).toBe(half.latestReading?.stateOfChargePercent);
   });
 
   it('a battery below the minimum start charge makes the match not ready, naming it', async () => {

@@ -24,11 +24,13 @@ export function useLogReading() {
     mutationFn: logReading,
     onSuccess: ({ health, ...reading }: CreatedReadingJson) => {
       const latest: ReadingJson = reading;
+      // The newest reading sets the estimated charge too (nothing has happened since it).
+      const fresh = { latestReading: latest, estimatedChargePercent: latest.stateOfChargePercent, health };
       queryClient.setQueryData<BatteryJson[]>(batteriesQueryOptions().queryKey, (list) =>
-        list?.map((battery) => (battery.id === latest.batteryId ? { ...battery, latestReading: latest, health } : battery)),
+        list?.map((battery) => (battery.id === latest.batteryId ? { ...battery, ...fresh } : battery)),
       );
       queryClient.setQueryData<BatteryDetailJson>(batteryQueryKey(latest.batteryId), (battery) =>
-        battery && { ...battery, latestReading: latest, health, readings: [...battery.readings.filter((old) => old.id !== latest.id), latest] },
+        battery && { ...battery, ...fresh, readings: [...battery.readings.filter((old) => old.id !== latest.id), latest] },
       );
       // Not awaited: the form shows the answer at once; the lists catch up in the background.
       for (const queryKey of [['batteries'], ['battery', latest.batteryId], ['battery-plan'], ['readiness']]) {

@@ -2,7 +2,7 @@ import type { ReactNode } from 'react';
 import type { BatterySettings } from '@shared/domain/battery-state';
 import type { BatteryJson } from '@shared/schemas/batteries';
 import { RelativeTime } from '../../../components/ui/relative-time';
-import { CHEMISTRY_WORDS, formatIncrease, formatMilliohm } from './battery-format';
+import { CHEMISTRY_WORDS, formatIncrease, formatMilliohm, formatPercent } from './battery-format';
 import { BatteryStatusTag, HealthTag } from './battery-tags';
 import { ChargeValue } from './charge-value';
 
@@ -24,7 +24,7 @@ function thresholdsOf(settings: BatterySettings): string {
 
 /** Where the battery stands now: status, charge, health against its baseline, use, and what it is. */
 export function BatteryFacts({ battery, settings, now, actions }: { battery: BatteryJson; settings: BatterySettings | undefined; now: Date; actions?: ReactNode }) {
-  const { health, latestReading: latest, charging } = battery;
+  const { health, latestReading: latest, estimatedChargePercent: estimate, charging } = battery;
   return (
     <section aria-labelledby="battery-now-title" className="flex flex-col gap-4 rounded-2xl border border-line bg-surface p-4 shadow-sm sm:p-5">
       <h2 id="battery-now-title" className="text-2xl font-bold">
@@ -43,15 +43,28 @@ export function BatteryFacts({ battery, settings, now, actions }: { battery: Bat
           </span>
         </Fact>
         <Fact term="State of charge">
-          {latest ? (
-            <span className="flex flex-col">
-              <ChargeValue reading={latest} size="lg" />
-              <span className="text-sm text-ink-muted">
-                read <RelativeTime at={latest.takenAt} now={now} />
-              </span>
-            </span>
-          ) : (
+          {/* The estimate (what the plan and readiness go by) and the last reading it started from. */}
+          {estimate === null && !latest ? (
             <span className="text-ink-muted">No reading yet</span>
+          ) : (
+            <span className="flex flex-col gap-1">
+              {estimate !== null && (
+                <span>
+                  About <strong className="text-4xl whitespace-nowrap tabular-nums">{formatPercent(estimate)}</strong> now (estimate)
+                </span>
+              )}
+              {latest ? (
+                <span className="flex flex-wrap items-baseline gap-x-2">
+                  <span>Last reading</span>
+                  <ChargeValue reading={latest} />
+                  <span className="text-sm text-ink-muted">
+                    taken <RelativeTime at={latest.takenAt} now={now} />
+                  </span>
+                </span>
+              ) : (
+                <span className="text-sm text-ink-muted">Not read yet: from its last charge</span>
+              )}
+            </span>
           )}
         </Fact>
         <Fact term="Health" wide>

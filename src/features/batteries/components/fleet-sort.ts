@@ -14,11 +14,11 @@ export const DEFAULT_FLEET_SORT: FleetSort = { column: 'label', direction: 'asce
 // Labels like "2027-10" and "2027-9" sort as a person counts.
 const compareLabels = new Intl.Collator(undefined, { numeric: true, sensitivity: 'base' }).compare;
 
-/** What each column sorts by; null for "nothing to say" (no reading, never used). */
+/** What each column sorts by; null for "nothing to say" (no reading, never used). Charge is the estimate now, as shown. */
 const SORT_KEYS: Record<FleetColumn, (battery: BatteryJson) => number | string | null> = {
   label: (battery) => battery.label,
   status: (battery) => BATTERY_STATUSES.indexOf(battery.status),
-  charge: (battery) => battery.latestReading?.stateOfChargePercent ?? null,
+  charge: (battery) => battery.estimatedChargePercent,
   resistance: (battery) => battery.latestReading?.internalResistanceMilliohm ?? null,
   health: (battery) => HEALTH_STATUSES.indexOf(battery.health.status),
   lastUsed: (battery) => (battery.lastUsedAt ? Date.parse(battery.lastUsedAt) : null),

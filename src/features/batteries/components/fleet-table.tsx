@@ -4,7 +4,7 @@ import type { BatteryJson } from '@shared/schemas/batteries';
 import { RelativeTime } from '../../../components/ui/relative-time';
 import { formatMilliohm } from './battery-format';
 import { BatteryStatusTag, HealthTag } from './battery-tags';
-import { ChargeValue } from './charge-value';
+import { EstimatedCharge } from './charge-value';
 import { DEFAULT_FLEET_SORT, FLEET_COLUMNS, nextFleetSort, sortFleet, type FleetColumn, type FleetSort } from './fleet-sort';
 
 const HEADINGS: Record<FleetColumn, string> = {
@@ -98,7 +98,9 @@ export function FleetTable({ batteries, now }: { batteries: BatteryJson[]; now: 
               <td className="px-2 py-3 whitespace-nowrap">
                 <BatteryStatusTag status={battery.status} />
               </td>
-              <td className="px-2 py-3">{battery.latestReading ? <ChargeValue reading={battery.latestReading} /> : <span className="text-ink-muted">No reading</span>}</td>
+              <td className="px-2 py-3">
+                <EstimatedCharge battery={battery} />
+              </td>
               <td className="px-2 py-3 text-lg whitespace-nowrap tabular-nums">
                 {battery.latestReading ? formatMilliohm(battery.latestReading.internalResistanceMilliohm) : <span className="text-ink-muted">–</span>}
               </td>
