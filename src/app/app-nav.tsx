@@ -18,12 +18,12 @@ export function AppNav() {
     >
       <ul className="flex lg:flex-col lg:gap-2">
         {items.map(({ to, label, icon: Icon }) => (
-          <li key={to} className="flex-1">
+          <li key={to} className="min-w-0 flex-1">
             <NavLink
               to={to}
               end={to === '/'}
               className={({ isActive }) =>
-                `flex min-h-16 flex-col items-center justify-center gap-0.5 border-t-4 px-2 text-sm lg:min-h-12 lg:flex-row lg:justify-start lg:gap-3 lg:rounded-xl lg:border-t-0 lg:border-l-4 lg:px-4 lg:text-lg ${
+                `flex min-h-16 flex-col items-center justify-center gap-0.5 border-t-4 px-0.5 text-[0.6875rem] min-[400px]:text-sm lg:min-h-12 lg:flex-row lg:justify-start lg:gap-3 lg:rounded-xl lg:border-t-0 lg:border-l-4 lg:px-4 lg:text-lg ${
                   isActive
                     ? 'border-accent bg-accent-soft font-bold text-accent-ink'
                     : 'border-transparent text-ink-muted hover:bg-sunken hover:text-ink'
@@ -31,7 +31,8 @@ export function AppNav() {
               }
             >
               <Icon className="size-7 lg:size-6" />
-              {label}
+              {/* Six areas share a 360 px phone: smaller words there, so none is cut. */}
+              <span className="max-w-full truncate">{label}</span>
             </NavLink>
           </li>
         ))}

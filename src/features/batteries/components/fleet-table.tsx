@@ -46,8 +46,10 @@ export function FleetTable({ batteries, now }: { batteries: BatteryJson[]; now: 
     void navigate(`/batteries/${battery.id}`);
   };
 
+  // Relative: the screen-reader-only words inside are absolutely placed; they must scroll with
+  // the table, not widen the whole page.
   return (
-    <div className="overflow-x-auto rounded-2xl border border-line bg-surface shadow-sm">
+    <div className="relative overflow-x-auto rounded-2xl border border-line bg-surface shadow-sm">
       <table className="w-full border-collapse text-left">
         <caption className="sr-only">
           The team&apos;s batteries, sorted by {HEADINGS[sort.column].toLowerCase()}, {sort.direction}
