@@ -1,10 +1,10 @@
 import type { CreateBatteryInput } from '../../shared/schemas/batteries';
 import { inTransaction } from '../db/transaction';
 import { HttpError } from '../errors';
-import { Battery } from '../models';
+import { Battery, Team } from '../models';
 import { presentBattery } from '../presenters/battery';
 import { emitToTeam } from '../realtime/broadcast';
-import { assertLabelFree, lockTeam } from './battery-guards';
+import {assertLabelFree } from './battery-guards';
 
 /**
  * Adds a battery to the fleet, ready for use. Resending the same `id` answers the battery the
@@ -13,7 +13,7 @@ import { assertLabelFree, lockTeam } from './battery-guards';
  */
 export async function createBattery(teamId: string, { id, ...fields }: CreateBatteryInput) {
   return inTransaction(async (transaction) => {
-    await lockTeam(teamId, transaction);
+    await Team.lockRow(teamId, transaction);
     if (id) {
       const existing = await Battery.findByPk(id, { transaction });
       if (existing?.teamId === teamId) return { battery: await presentBattery(existing, transaction), created: false };

@@ -1,15 +1,15 @@
 import type { CreateChargerInput } from '../../shared/schemas/batteries';
 import { inTransaction } from '../db/transaction';
 import { HttpError } from '../errors';
-import { Charger } from '../models';
+import { Charger, Team } from '../models';
 import { presentCharger } from '../presenters/battery';
 import { emitToTeam } from '../realtime/broadcast';
-import { lockTeam } from './battery-guards';
+
 
 /** Adds a charger with its bays. Idempotent on `id`, like every create. */
 export async function createCharger(teamId: string, { id, ...fields }: CreateChargerInput) {
   return inTransaction(async (transaction) => {
-    await lockTeam(teamId, transaction);
+    await Team.lockRow(teamId, transaction);
     if (id) {
       const existing = await Charger.findByPk(id, { transaction });
       if (existing?.teamId === teamId) return { charger: presentCharger(existing), created: false };

@@ -10,7 +10,7 @@ import { emitToTeam, moveTeamToEvent } from '../realtime/broadcast';
  */
 export async function createEvent(teamId: string, { id, current, ...fields }: CreateEventInput) {
   return inTransaction(async (transaction) => {
-    const team = await Team.findByPk(teamId, { transaction, lock: transaction.LOCK.UPDATE, rejectOnEmpty: true });
+    const team = await Team.lockRow(teamId, transaction);
     if (id) {
       const existing = await Event.findByPk(id, { transaction });
       if (existing?.teamId === teamId) return { event: existing, team, created: false };

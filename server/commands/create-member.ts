@@ -12,7 +12,7 @@ import { Membership, Team, User } from '../models';
 export async function createMember(teamId: string, input: CreateMemberInput) {
   return inTransaction(async (transaction) => {
     // One membership write per team at a time: a resent create waits, then finds the first.
-    await Team.findByPk(teamId, { transaction, lock: transaction.LOCK.UPDATE, rejectOnEmpty: true });
+    await Team.lockRow(teamId, transaction);
     if (input.id) {
       const existing = await Membership.findByPk(input.id, { include: [{ model: User, as: 'user' }], transaction });
       if (existing?.teamId === teamId) return { membership: existing, temporaryPassword: null, created: false };

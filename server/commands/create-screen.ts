@@ -10,7 +10,7 @@ import { hashScreenToken, newScreenToken, ScreenToken, Team } from '../models';
 export async function createScreen(teamId: string, createdById: string, input: CreateScreenInput) {
   return inTransaction(async (transaction) => {
     // One screen write per team at a time: a resent create waits, then finds the first.
-    await Team.findByPk(teamId, { transaction, lock: transaction.LOCK.UPDATE, rejectOnEmpty: true });
+    await Team.lockRow(teamId, transaction);
     if (input.id) {
       const existing = await ScreenToken.findByPk(input.id, { transaction });
       if (existing?.teamId === teamId) return { screen: existing, token: null, created: false };

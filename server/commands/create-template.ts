@@ -13,7 +13,7 @@ import { itemsWithIds } from './template-items';
 export async function createTemplate(teamId: string, userId: string, { id, name, phase, items }: CreateTemplateInput) {
   return inTransaction(async (transaction) => {
     // One template create per team at a time: a resent create waits, then finds the first.
-    await Team.findByPk(teamId, { transaction, lock: transaction.LOCK.UPDATE, rejectOnEmpty: true });
+    await Team.lockRow(teamId, transaction);
     if (id) {
       const existing = await ChecklistTemplate.findByPk(id, { transaction });
       if (existing?.teamId === teamId) return { template: await presentTemplate(existing, transaction), created: false };

@@ -1,10 +1,10 @@
 import type { EndChargingInput } from '../../shared/schemas/batteries';
 import { inTransaction } from '../db/transaction';
 import { notFound } from '../errors';
-import { Battery, ChargingSession } from '../models';
+import { Battery, ChargingSession, Team } from '../models';
 import { presentChargingSession } from '../presenters/battery';
 import { emitToTeam } from '../realtime/broadcast';
-import { assertInstant, lockTeam } from './battery-guards';
+import { assertInstant } from './input-guards';
 
 /**
  * Takes a battery off its bay (it is then `ready`). Sent again for a session already ended, it
@@ -12,7 +12,7 @@ import { assertInstant, lockTeam } from './battery-guards';
  */
 export async function endCharging(teamId: string, userId: string, sessionId: string, { endedAt }: EndChargingInput) {
   return inTransaction(async (transaction) => {
-    await lockTeam(teamId, transaction);
+    await Team.lockRow(teamId, transaction);
     const session = await ChargingSession.findByPk(sessionId, { transaction });
     const battery = session ? await Battery.findOne({ where: { id: session.batteryId, teamId }, transaction }) : null;
     if (!session || !battery) throw notFound('Charging session');

@@ -2,12 +2,12 @@ import { allianceOf } from '../../shared/domain/timeline';
 import type { CreateUseInput } from '../../shared/schemas/batteries';
 import { inTransaction } from '../db/transaction';
 import { HttpError, notFound } from '../errors';
-import { Battery, BatteryUse, Event, Match } from '../models';
+import { Battery, BatteryUse, Event, Match, Team } from '../models';
 import { presentUse } from '../presenters/battery';
 import { presentMatch } from '../presenters/match';
 import { emitToEvent } from '../realtime/broadcast';
 import { closeOpenCharging } from './battery-closing';
-import { lockTeam, openUseOfTeam } from './battery-guards';
+import {openUseOfTeam } from './battery-guards';
 
 /**
  * Puts a battery in the robot for one of our matches of the team's current event. The robot holds
@@ -17,7 +17,7 @@ import { lockTeam, openUseOfTeam } from './battery-guards';
  */
 export async function installBattery(teamId: string, userId: string, batteryId: string, { id, matchId }: CreateUseInput) {
   return inTransaction(async (transaction) => {
-    const team = await lockTeam(teamId, transaction);
+    const team = await Team.lockRow(teamId, transaction);
     const battery = await Battery.ofTeam(teamId, batteryId, { transaction });
     if (id) {
       // A resend is for the same battery: an id reused for another one must not answer that one's use.

@@ -1,13 +1,11 @@
 import type { FieldProgressInput } from '../../shared/schemas/schedule';
 import { inTransaction } from '../db/transaction';
-import { HttpError, notFound } from '../errors';
+import { notFound } from '../errors';
 import { Event, FieldMark, Match } from '../models';
 import { presentMatchWithStart } from '../presenters/match';
 import { emitToEvent } from '../realtime/broadcast';
+import { assertInstant } from './input-guards';
 import { startPreMatchRuns } from './start-pre-match-runs';
-
-// Tablet clocks drift; a minute ahead of the server is still "now".
-const FUTURE_TOLERANCE_MS = 60_000;
 
 /**
  * Records that a match of the event went on the field (now, unless `startedAt` says when), and who
@@ -21,9 +19,7 @@ export async function recordFieldMark(teamId: string, eventId: string, userId: s
     if (!match) throw notFound('Match');
     const at = startedAt ? new Date(startedAt) : new Date();
     // A start in the future (a typo, or a late tap read on the wrong day) would skew every projection.
-    if (at.getTime() > Date.now() + FUTURE_TOLERANCE_MS) {
-      throw new HttpError(400, 'invalid', 'Check these fields: startedAt', { fields: { startedAt: 'Must not be in the future' } });
-    }
+    assertInstant('startedAt', at);
     await FieldMark.create(
       { eventId: event.id, matchId: match.id, startedAt: at, markedById: userId },
       { transaction },

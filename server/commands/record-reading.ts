@@ -6,7 +6,7 @@ import { HttpError } from '../errors';
 import { Battery, BatteryReading, BatteryUse, User } from '../models';
 import { healthOfReadings, presentReading } from '../presenters/battery';
 import { emitToTeam } from '../realtime/broadcast';
-import { assertInstant, invalidField } from './battery-guards';
+import { assertInstant, invalidField } from './input-guards';
 
 /**
  * Logs what the analyzer showed, and answers it with its state of charge and the battery's health

@@ -1,10 +1,10 @@
 import type { EndUseInput } from '../../shared/schemas/batteries';
 import { inTransaction } from '../db/transaction';
 import { notFound } from '../errors';
-import { Battery, BatteryUse } from '../models';
+import { Battery, BatteryUse, Team } from '../models';
 import { presentUse } from '../presenters/battery';
 import { emitToEvent, emitToTeam } from '../realtime/broadcast';
-import { assertInstant, lockTeam } from './battery-guards';
+import { assertInstant } from './input-guards';
 
 /**
  * Records a battery taken out of the robot (it is then `spent`). Sent again for a use already
@@ -12,7 +12,7 @@ import { assertInstant, lockTeam } from './battery-guards';
  */
 export async function removeBattery(teamId: string, userId: string, useId: string, { removedAt }: EndUseInput) {
   return inTransaction(async (transaction) => {
-    await lockTeam(teamId, transaction);
+    await Team.lockRow(teamId, transaction);
     const use = await BatteryUse.findByPk(useId, { transaction });
     const battery = use ? await Battery.findOne({ where: { id: use.batteryId, teamId }, transaction }) : null;
     if (!use || !battery) throw notFound('Battery use');

@@ -5,10 +5,10 @@ import { fleetRecords } from '../batteries/fleet-records';
 import { settingsOf } from '../batteries/settings';
 import { inTransaction } from '../db/transaction';
 import { HttpError } from '../errors';
-import { Battery, BatteryUse, Charger, ChargingSession, Event } from '../models';
+import { Battery, BatteryUse, Charger, ChargingSession, Event, Team } from '../models';
 import { presentChargingSession } from '../presenters/battery';
 import { emitToTeam } from '../realtime/broadcast';
-import { invalidField, lockTeam } from './battery-guards';
+import { invalidField } from './input-guards';
 
 const MINUTE_MS = 60_000;
 
@@ -19,7 +19,7 @@ const MINUTE_MS = 60_000;
  */
 export async function startCharging(teamId: string, userId: string, batteryId: string, { id, chargerId, bay }: StartChargingInput) {
   return inTransaction(async (transaction) => {
-    const team = await lockTeam(teamId, transaction);
+    const team = await Team.lockRow(teamId, transaction);
     const battery = await Battery.ofTeam(teamId, batteryId, { transaction });
     if (id) {
       // A resend is for the same battery: an id reused for another one must not answer that one's session.

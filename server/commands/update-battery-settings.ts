@@ -2,9 +2,9 @@ import type { BatterySettings } from '../../shared/domain/battery-state';
 import type { BatterySettingsInput } from '../../shared/schemas/batteries';
 import { settingsOf } from '../batteries/settings';
 import { inTransaction } from '../db/transaction';
-import { BatterySetting } from '../models';
+import { BatterySetting, Team } from '../models';
 import { emitToTeam } from '../realtime/broadcast';
-import { invalidField, lockTeam } from './battery-guards';
+import { invalidField } from './input-guards';
 
 /**
  * Changes some of the team's battery settings; the team gets its own row on its first change.
@@ -12,7 +12,7 @@ import { invalidField, lockTeam } from './battery-guards';
  */
 export async function updateBatterySettings(teamId: string, changes: BatterySettingsInput): Promise<BatterySettings> {
   return inTransaction(async (transaction) => {
-    await lockTeam(teamId, transaction);
+    await Team.lockRow(teamId, transaction);
     const settings: BatterySettings = { ...(await settingsOf(teamId, transaction)), ...changes };
     if (settings.watchIncreasePercent >= settings.replaceIncreasePercent) {
       const field = changes.replaceIncreasePercent !== undefined ? 'replaceIncreasePercent' : 'watchIncreasePercent';

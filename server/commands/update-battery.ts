@@ -2,11 +2,12 @@ import type { BatteryStatus } from '../../shared/domain/battery-state';
 import type { UpdateBatteryInput } from '../../shared/schemas/batteries';
 import { inTransaction } from '../db/transaction';
 import { stale } from '../errors';
-import { Battery } from '../models';
+import { Battery, Team } from '../models';
 import { presentBattery } from '../presenters/battery';
 import { emitToEvent, emitToTeam } from '../realtime/broadcast';
 import { closeOpenCharging, closeOpenUse } from './battery-closing';
-import { assertLabelFree, invalidField, lockTeam } from './battery-guards';
+import { assertLabelFree } from './battery-guards';
+import { invalidField } from './input-guards';
 
 // These two need a match or a bay: installing and charging set them, with their records.
 const SET_BY_RECORDS: readonly BatteryStatus[] = ['in_robot', 'charging'];
@@ -18,7 +19,7 @@ const SET_BY_RECORDS: readonly BatteryStatus[] = ['in_robot', 'charging'];
  */
 export async function updateBattery(teamId: string, userId: string, id: string, { version, status, ...fields }: UpdateBatteryInput) {
   return inTransaction(async (transaction) => {
-    await lockTeam(teamId, transaction);
+    await Team.lockRow(teamId, transaction);
     const battery = await Battery.ofTeam(teamId, id, { transaction });
     if (version !== undefined && version !== battery.version) throw stale(await presentBattery(battery, transaction));
     if (fields.label !== undefined && fields.label !== battery.label) await assertLabelFree(teamId, fields.label, battery.id, transaction);

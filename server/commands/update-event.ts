@@ -8,7 +8,7 @@ import { presentEvent } from '../presenters/event';
 /** Edits an event (refusing a stale `version`) and, with `current: true`, makes it current. */
 export async function updateEvent(teamId: string, eventId: string, { current, version, settings, ...fields }: UpdateEventInput) {
   return inTransaction(async (transaction) => {
-    const team = await Team.findByPk(teamId, { transaction, lock: transaction.LOCK.UPDATE, rejectOnEmpty: true });
+    const team = await Team.lockRow(teamId, transaction);
     const event = await Event.findOne({ where: { id: eventId, teamId }, transaction, lock: transaction.LOCK.UPDATE });
     if (!event) throw notFound('Event');
     if (version !== undefined && version !== event.version) throw stale(presentEvent(event, team.currentEventId));

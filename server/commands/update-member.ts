@@ -16,7 +16,7 @@ import { presentMember } from '../presenters/team';
 export async function updateMember(teamId: string, membershipId: string, input: UpdateMemberInput) {
   const result = await inTransaction(async (transaction) => {
     // Serialises member changes per team, so two admins demoting each other cannot both pass the last-admin check.
-    await Team.findByPk(teamId, { transaction, lock: transaction.LOCK.UPDATE, rejectOnEmpty: true });
+    await Team.lockRow(teamId, transaction);
     const found = await Membership.findOne({
       where: { id: membershipId, teamId },
       include: [{ model: User, as: 'user' }],

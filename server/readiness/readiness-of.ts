@@ -1,6 +1,6 @@
 import type { Transaction } from 'sequelize';
 import { computeReadiness, type ReadinessFacts, type ReadinessJson } from '../../shared/domain/readiness';
-import { computeTimeline } from '../../shared/domain/timeline';
+import { computeTimeline, type TimelineJson } from '../../shared/domain/timeline';
 import { chargeOf, fleetDraw } from '../batteries/fleet-charge';
 import { fleetRecords } from '../batteries/fleet-records';
 import { settingsOf } from '../batteries/settings';
@@ -18,8 +18,19 @@ import { presentSchedule } from '../presenters/match';
 export async function readinessOf(event: Event, matchId: string, now: Date, transaction?: Transaction): Promise<ReadinessJson> {
   const schedule = await presentSchedule(event.id, transaction);
   if (!schedule.some((match) => match.id === matchId)) throw notFound('Match');
-  const timeline = computeTimeline(schedule, timelineSettingsOf(event), now);
-  const row = timeline.matches.find((match) => match.id === matchId)!;
+  return readinessOnTimeline(event, computeTimeline(schedule, timelineSettingsOf(event), now), matchId, now, transaction);
+}
+
+/** The same, on a timeline the caller already projected at `now` (the pit screen has one in hand). */
+export async function readinessOnTimeline(
+  event: Event,
+  timeline: TimelineJson,
+  matchId: string,
+  now: Date,
+  transaction?: Transaction,
+): Promise<ReadinessJson> {
+  const row = timeline.matches.find((match) => match.id === matchId);
+  if (!row) throw notFound('Match');
   if (row.alliance === null) throw new HttpError(400, 'not_our_match', 'We do not play in this match');
   // A match already on the field has no queue call ahead; ourMatches lists only those to play.
   const queueAt = timeline.ourMatches.find((match) => match.matchId === matchId)?.queueAt ?? null;

@@ -12,7 +12,7 @@ import { authorize } from '../policies/authorize';
 import { timelineSettingsOf } from '../presenters/event';
 import { presentSchedule } from '../presenters/match';
 import { presentScreen, presentScreenEvent } from '../presenters/screen';
-import { readinessOf } from '../readiness/readiness-of';
+import { readinessOnTimeline } from '../readiness/readiness-of';
 
 const screenParams = z.object({ id: z.uuid({ message: 'Must be a UUID' }) });
 const tokenParams = z.object({ token: z.string() });
@@ -90,7 +90,7 @@ export function screenBoardRouter() {
       timeline,
       matches,
       // Readiness reasons name items and a lead's sign-off reason, never who marked what.
-      readiness: event && next ? await readinessOf(event, next.matchId, now) : null,
+      readiness: event && timeline && next ? await readinessOnTimeline(event, timeline, next.matchId, now) : null,
     };
     // The token is in the URL: no shared cache may keep the answer.
     res.set('Cache-Control', 'no-store').json(body);
