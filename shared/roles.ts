@@ -29,8 +29,11 @@ export const CAPABILITIES = {
   'templates:edit': ['admin', 'lead'],
   'checks:mark': ['admin', 'lead', 'crew'],
   'checks:sign-off': ['admin', 'lead'],
+  // A viewer reads tickets' titles and status only (through board:read).
+  'repairs:read': ['admin', 'lead', 'crew', 'battery', 'safety'],
   'repairs:work': ['admin', 'lead', 'crew'],
-  'repairs:close': ['admin', 'lead'],
+  // Placing a card by hand, removing anyone's photo, editing the subsystem list.
+  'repairs:manage': ['admin', 'lead'],
   'batteries:swap': ['admin', 'crew', 'battery'],
   'batteries:manage': ['admin', 'battery'],
   'incidents:report': ['admin', 'lead', 'crew', 'battery', 'safety', 'viewer'],

@@ -69,8 +69,11 @@ export interface ReadinessFacts {
   preMatchRuns: readonly ReadinessRun[];
   /** Left out until the battery area tracks it; `installed: null` when none is in the robot. */
   battery?: { installed: { label: string; stateOfChargePercent: number | null } | null; minimumChargePercent: number };
-  /** Left out until the repair area tracks it: open tickets that block the match. */
-  blockingRepairs?: readonly { id: string; title: string }[];
+  /**
+   * Left out until the repair area tracks it: open tickets that block the match; `late` when one
+   * cannot make the queue call (see repair urgency).
+   */
+  blockingRepairs?: readonly { id: string; title: string; late: boolean }[];
 }
 
 /** Under this long before the queue call, open required work puts the match at risk loudly. */
@@ -191,11 +194,12 @@ function batteryReasons({ battery }: ReadinessFacts): RuleReason[] {
   return [];
 }
 
+// Work still to do before the queue call, like an open check; not ready at once when it cannot make it.
 function repairReasons({ blockingRepairs }: ReadinessFacts): RuleReason[] {
   return (blockingRepairs ?? []).map((repair) => ({
     code: 'repair_blocks_match' as const,
-    level: 'not_ready' as const,
-    message: `Open repair blocks this match: ${repair.title}`,
+    level: repair.late ? ('not_ready' as const) : ('pending' as const),
+    message: repair.late ? `Open repair blocks this match and cannot make the queue call: ${repair.title}` : `Open repair blocks this match: ${repair.title}`,
   }));
 }
 

@@ -52,7 +52,7 @@ describe('can(roles, capability)', () => {
     expect(can(['crew', 'battery'], 'batteries:manage')).toBe(true);
     expect(can(['crew', 'battery'], 'checks:mark')).toBe(true);
     // A union never grants what neither role has.
-    expect(can(['crew', 'battery'], 'repairs:close')).toBe(false);
+    expect(can(['crew', 'battery'], 'repairs:manage')).toBe(false);
     expect(can(['viewer', 'safety'], 'incidents:read')).toBe(true);
     expect(can(['viewer', 'lead'], 'events:manage')).toBe(false);
   });

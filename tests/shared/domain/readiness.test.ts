@@ -198,9 +198,20 @@ describe('computeReadiness: every reason', () => {
     expect(computeReadiness(facts(unknown, -5), NOW).reasons).toEqual(reasons);
   });
 
-  it('an open repair that blocks the match is not ready, named', () => {
-    const result = computeReadiness(facts({ blockingRepairs: [{ id: 'r1', title: 'Intake roller shaft snapped' }] }), NOW);
-    expect(result.reasons).toEqual([{ code: 'repair_blocks_match', level: 'not_ready', message: 'Open repair blocks this match: Intake roller shaft snapped' }]);
+  it('an open repair that blocks the match is at risk before the queue call and not ready once it has passed, named', () => {
+    const open = { blockingRepairs: [{ id: 'r1', title: 'Intake roller shaft snapped', late: false }] };
+    const message = 'Open repair blocks this match: Intake roller shaft snapped';
+    expect(computeReadiness(facts(open), NOW).reasons).toEqual([{ code: 'repair_blocks_match', level: 'at_risk', message }]);
+    const passed = computeReadiness(facts(open, -1), NOW);
+    expect(passed.state).toBe('not_ready');
+    expect(passed.reasons).toContainEqual({ code: 'repair_blocks_match', level: 'not_ready', message });
+  });
+
+  it('a blocking repair that cannot make the queue call is not ready at once', () => {
+    const late = { blockingRepairs: [{ id: 'r1', title: 'Arm gearbox stripped', late: true }] };
+    expect(computeReadiness(facts(late), NOW).reasons).toEqual([
+      { code: 'repair_blocks_match', level: 'not_ready', message: 'Open repair blocks this match and cannot make the queue call: Arm gearbox stripped' },
+    ]);
   });
 
   it('facts an area does not track yet add no reason', () => {
@@ -212,7 +223,7 @@ describe('computeReadiness: every reason', () => {
 describe('computeReadiness: order and rules', () => {
   it('lists not-ready reasons before at-risk ones, each level in rule order', () => {
     const preMatchRuns = [run([item('Radio secured'), item('Spare zip ties', { required: false }), bumpers('Blue')])];
-    const result = computeReadiness(facts({ preMatchRuns, blockingRepairs: [{ id: 'r1', title: 'Arm chain off' }] }), NOW);
+    const result = computeReadiness(facts({ preMatchRuns, blockingRepairs: [{ id: 'r1', title: 'Arm chain off', late: true }] }), NOW);
     expect(codes(result)).toEqual(['bumper_mismatch', 'repair_blocks_match', 'checklist_incomplete', 'advisory_open']);
   });
 
