@@ -11,6 +11,7 @@ import { requireAuth } from './auth/require-auth';
 import { SessionStore } from './auth/session-store';
 import { apiNotFound, errorHandler } from './middleware/error-handler';
 import { initModels } from './models';
+import { photoStore } from './repairs/photo-store';
 import { batteriesRouter } from './routes/batteries';
 import { batteryPlanRouter } from './routes/battery-plan';
 import { batterySettingsRouter } from './routes/battery-settings';
@@ -23,6 +24,9 @@ import { eventsRouter } from './routes/events';
 import { fieldProgressRouter } from './routes/field-progress';
 import { healthRouter } from './routes/health';
 import { eventMatchesRouter, matchesRouter } from './routes/matches';
+import { repairPhotosRouter } from './routes/repair-photos';
+import { repairSubsystemsRouter } from './routes/repair-subsystems';
+import { eventRepairsRouter, repairsRouter } from './routes/repairs';
 import { screenBoardRouter, screensRouter } from './routes/screens';
 import { sessionRouter } from './routes/session';
 import { teamRouter } from './routes/team';
@@ -39,7 +43,13 @@ export function createApp({ config, sequelize }: { config: Config; sequelize: Se
   app.use(
     helmet({
       // A pit network is often plain http on a LAN: never rewrite requests to https.
-      contentSecurityPolicy: { directives: { upgradeInsecureRequests: null } },
+      contentSecurityPolicy: {
+        directives: {
+          upgradeInsecureRequests: null,
+          // blob: for the preview of a photo picked on the tablet before it is uploaded.
+          imgSrc: ["'self'", 'data:', 'blob:'],
+        },
+      },
       strictTransportSecurity: false,
     }),
   );
@@ -71,6 +81,7 @@ export function createApp({ config, sequelize }: { config: Config; sequelize: Se
   api.use('/session', sessionRouter({ passport, csrf, cookieName: SESSION_COOKIE }));
   api.use('/team/screens', requireAuth, screensRouter());
   api.use('/team/battery-settings', requireAuth, batterySettingsRouter());
+  api.use('/team/repair-subsystems', requireAuth, repairSubsystemsRouter());
   api.use('/team', requireAuth, teamRouter());
   // The event's areas before the events router, so that requireAuth runs once per request.
   api.use('/events/:eventId/matches', requireAuth, eventMatchesRouter());
@@ -78,6 +89,7 @@ export function createApp({ config, sequelize }: { config: Config; sequelize: Se
   api.use('/events/:eventId/timeline', requireAuth, timelineRouter());
   api.use('/events/:eventId/checklist-runs', requireAuth, eventChecklistRunsRouter());
   api.use('/events/:eventId/battery-plan', requireAuth, batteryPlanRouter());
+  api.use('/events/:eventId/repairs', requireAuth, eventRepairsRouter());
   api.use('/events', requireAuth, eventsRouter());
   api.use('/matches', requireAuth, matchesRouter());
   api.use('/checklist-templates', requireAuth, checklistTemplatesRouter());
@@ -89,6 +101,9 @@ export function createApp({ config, sequelize }: { config: Config; sequelize: Se
   api.use('/battery-uses', requireAuth, batteryUsesRouter());
   api.use('/chargers', requireAuth, chargersRouter());
   api.use('/charging-sessions', requireAuth, chargingSessionsRouter());
+  // A ticket's photos before the repairs router, as for the event's areas above.
+  api.use('/repairs/:id/photos', requireAuth, repairPhotosRouter(photoStore(config.uploadsDir)));
+  api.use('/repairs', requireAuth, repairsRouter());
   api.use(apiNotFound);
   app.use('/api', api);
 

@@ -11,3 +11,9 @@ export function assertInstant(field: string, at: Date, { notBefore, what }: { no
   if (at.getTime() > Date.now() + FUTURE_TOLERANCE_MS) throw invalidField(field, 'Must not be in the future');
   if (notBefore && at < notBefore) throw invalidField(field, `Must not be before ${what} (${notBefore.toISOString()})`);
 }
+
+/** 400 naming every field in `fields` (field → message), in the order given; nothing when empty. */
+export function assertNoInvalidFields(fields: Record<string, string>) {
+  const names = Object.keys(fields);
+  if (names.length > 0) throw new HttpError(400, 'invalid', `Check these fields: ${names.join(', ')}`, { fields });
+}

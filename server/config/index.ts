@@ -25,6 +25,8 @@ const envSchema = z.object({
     }),
   // Where the built client is; tests that build their own copy point here.
   CLIENT_DIR: z.string().default('dist'),
+  // The private database, the session secret and uploaded files (photos) live under it.
+  DATA_DIR: z.string().default('./data'),
 });
 
 export type Config = ReturnType<typeof loadConfig>;
@@ -47,5 +49,8 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env) {
     sessionIdleMs: vars.SESSION_IDLE_HOURS * 3_600_000,
     trustProxy: vars.TRUST_PROXY,
     clientDir: path.resolve(vars.CLIENT_DIR),
+    dataDir: path.resolve(vars.DATA_DIR),
+    // Outside the client folder the server serves: uploads are read only through their routes.
+    uploadsDir: path.resolve(vars.DATA_DIR, 'uploads'),
   };
 }

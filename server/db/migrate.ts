@@ -5,6 +5,7 @@ import * as schedule from './migrations/20261202-0001-schedule';
 import * as screenTokens from './migrations/20261202-0002-screen-tokens';
 import * as checklists from './migrations/20261203-0001-checklists';
 import * as batteries from './migrations/20261204-0001-batteries';
+import * as repairs from './migrations/20261205-0001-repairs';
 
 // Listed by hand, in order: a glob would change meaning with the build layout.
 const MIGRATIONS = [
@@ -13,6 +14,7 @@ const MIGRATIONS = [
   { name: '20261202-0002-screen-tokens', ...screenTokens },
   { name: '20261203-0001-checklists', ...checklists },
   { name: '20261204-0001-batteries', ...batteries },
+  { name: '20261205-0001-repairs', ...repairs },
 ];
 
 /** The migrator for one database; `up()` applies what is missing, `down()` steps back. */

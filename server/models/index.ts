@@ -13,6 +13,10 @@ import { ChecklistTemplateVersion } from './checklist-template-version';
 import { Event } from './event';
 import { FieldMark } from './field-mark';
 import { Match } from './match';
+import { Repair } from './repair';
+import { RepairChange } from './repair-change';
+import { RepairPhoto } from './repair-photo';
+import { RepairSetting } from './repair-setting';
 import { Membership } from './membership';
 import { hashScreenToken, newScreenToken, ScreenToken } from './screen-token';
 import { SessionRecord } from './session-record';
@@ -22,6 +26,7 @@ import { User } from './user';
 export { Event, FieldMark, Match, Membership, ScreenToken, SessionRecord, Team, User };
 export { ChecklistItemState, ChecklistMark, ChecklistRun, ChecklistTemplate, ChecklistTemplateVersion };
 export { Battery, BatteryReading, BatterySetting, BatteryUse, Charger, ChargingSession };
+export { Repair, RepairChange, RepairPhoto, RepairSetting };
 export { decodeMarkValue, encodeMarkValue, hashScreenToken, newScreenToken };
 
 let boundTo: Sequelize | undefined;
@@ -34,7 +39,8 @@ export function initModels(sequelize: Sequelize) {
   const models = [Team, User, Membership, Event, SessionRecord, Match, FieldMark, ScreenToken];
   const checklistModels = [ChecklistTemplate, ChecklistTemplateVersion, ChecklistRun, ChecklistItemState, ChecklistMark];
   const batteryModels = [Battery, BatteryReading, BatteryUse, Charger, ChargingSession, BatterySetting];
-  for (const model of [...models, ...checklistModels, ...batteryModels]) model.initModel(sequelize);
+  const repairModels = [Repair, RepairPhoto, RepairChange, RepairSetting];
+  for (const model of [...models, ...checklistModels, ...batteryModels, ...repairModels]) model.initModel(sequelize);
   Membership.belongsTo(Team, { foreignKey: 'teamId', as: 'team' });
   Membership.belongsTo(User, { foreignKey: 'userId', as: 'user' });
   Team.hasMany(Membership, { foreignKey: 'teamId', as: 'memberships' });
@@ -56,4 +62,7 @@ export function initModels(sequelize: Sequelize) {
   Charger.belongsTo(Team, { foreignKey: 'teamId', as: 'team' });
   ChargingSession.belongsTo(Battery, { foreignKey: 'batteryId', as: 'battery' });
   ChargingSession.belongsTo(Charger, { foreignKey: 'chargerId', as: 'charger' });
+  Repair.belongsTo(Event, { foreignKey: 'eventId', as: 'event' });
+  RepairPhoto.belongsTo(Repair, { foreignKey: 'repairId', as: 'repair' });
+  RepairChange.belongsTo(Repair, { foreignKey: 'repairId', as: 'repair' });
 }

@@ -1,19 +1,21 @@
-import type { Transaction } from 'sequelize';
+import { Op, type Transaction } from 'sequelize';
+import { compareUrgency, urgencyOf } from '../../shared/domain/repair-urgency';
 import { computeReadiness, type ReadinessFacts, type ReadinessJson } from '../../shared/domain/readiness';
 import { computeTimeline, type TimelineJson } from '../../shared/domain/timeline';
 import { chargeOf, fleetDraw } from '../batteries/fleet-charge';
 import { fleetRecords } from '../batteries/fleet-records';
 import { settingsOf } from '../batteries/settings';
 import { HttpError, notFound } from '../errors';
-import { Battery, BatteryUse, ChecklistRun, type Event } from '../models';
+import { Battery, BatteryUse, ChecklistRun, Repair, type Event } from '../models';
 import { presentRuns } from '../presenters/checklist';
 import { timelineSettingsOf } from '../presenters/event';
 import { presentSchedule } from '../presenters/match';
+import { urgencyTicketOf } from '../repairs/board-order';
 
 /**
- * Readiness of one of our matches at `now`: gathers the facts `computeReadiness` reads. The
- * battery and repair areas add their facts here (`battery`, `blockingRepairs`), and no caller
- * changes. 404 for a match not in the event, 400 `not_our_match` for one we do not play in.
+ * Readiness of one of our matches at `now`: gathers the facts `computeReadiness` reads: the
+ * match's pre-match runs, the battery in the robot, and the open repairs that block it. 404
+ * for a match not in the event, 400 `not_our_match` for one we do not play in.
  */
 export async function readinessOf(event: Event, matchId: string, now: Date, transaction?: Transaction): Promise<ReadinessJson> {
   const schedule = await presentSchedule(event.id, transaction);
@@ -43,8 +45,21 @@ export async function readinessOnTimeline(
     match: { id: matchId, alliance: row.alliance, queueAt },
     preMatchRuns: runs.filter((run) => run.phase === 'pre_match'),
     ...(battery ? { battery } : {}),
+    blockingRepairs: await blockingRepairsOf(event, queueAt, now, transaction),
   };
   return computeReadiness(facts, now);
+}
+
+/**
+ * Open tickets of the event that block a match, most urgent first: each is work still to do
+ * before the match's queue call, and `late` when it cannot make it (the call has passed, or the
+ * work estimated is longer than the minutes left).
+ */
+async function blockingRepairsOf(event: Event, queueAt: string | null, now: Date, transaction?: Transaction): Promise<ReadinessFacts['blockingRepairs']> {
+  const repairs = await Repair.findAll({ where: { eventId: event.id, severity: 'blocks_match', status: { [Op.ne]: 'done' } }, transaction });
+  const tickets = repairs.map(urgencyTicketOf).sort(compareUrgency);
+  const titles = new Map(repairs.map((repair) => [repair.id, repair.title]));
+  return tickets.map((ticket) => ({ id: ticket.id, title: titles.get(ticket.id)!, late: urgencyOf(ticket, queueAt, now).late }));
 }
 
 /**

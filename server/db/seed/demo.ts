@@ -6,6 +6,7 @@ import { hashPassword } from '../../auth/passwords';
 import { Event, FieldMark, Match, Membership, Team, User } from '../../models';
 import { seedDemoBatteries } from './demo-batteries';
 import { seedDemoChecklists, type DemoChecklistMatch } from './demo-checklists';
+import { seedDemoRepairs } from './demo-repairs';
 import { demoSchedule } from './demo-schedule';
 import { inTransaction } from '../transaction';
 
@@ -28,8 +29,8 @@ export const demoEmail = (role: Role) => `${role}@${DEMO_DOMAIN}`;
 
 /**
  * Seeds the invented demo team with one account per role, its event's qualification schedule
- * (the field partway through day one), its checklists and its battery fleet. Refuses in
- * production, where well-known passwords must never exist.
+ * (the field partway through day one), its checklists, its battery fleet and its repair board.
+ * Refuses in production, where well-known passwords must never exist.
  */
 export async function seedDemo({ env, now = new Date() }: { env: string; now?: Date }) {
   if (env === 'production') throw new Error('Refusing to seed demo accounts with NODE_ENV=production');
@@ -57,6 +58,7 @@ export async function seedDemo({ env, now = new Date() }: { env: string; now?: D
     const matches = await createDemoMatches({ eventId: event.id, ourNumber: DEMO_TEAM.number, markedById: users.lead.id, now }, transaction);
     await seedDemoChecklists({ team, event, users, matches, now }, transaction);
     await seedDemoBatteries({ team, event, users, matches, now }, transaction);
+    await seedDemoRepairs({ event, users, matches, now }, transaction);
   });
 }
 
