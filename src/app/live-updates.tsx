@@ -12,17 +12,25 @@ export type LiveStatus = 'live' | 'reconnecting' | 'offline';
 // The battery plan reads the schedule's queue times too, and readiness reads the installed battery.
 const CHECK_RUNS = [['checklist-runs'], ['checklist-run'], ['readiness']];
 const BATTERIES = [['batteries'], ['battery'], ['chargers'], ['battery-settings'], ['battery-plan'], ['readiness']];
+// Repairs: a ticket's list, its page and readiness (a blocking ticket holds the robot back). The
+// repair list also carries the next queue call its minutes left count to, which moves with the
+// schedule: schedule changes make it stale as well.
+const REPAIRS = [['repairs'], ['repair'], ['readiness']];
+const SCHEDULE = [['matches'], ['timeline'], ['readiness'], ['battery-plan'], ['repairs']];
 const STALE_AFTER: Record<string, string[][]> = {
-  'events:updated': [['events'], ['team'], ['readiness'], ['battery-plan']],
-  'matches:imported': [['matches'], ['timeline'], ['readiness'], ['battery-plan']],
-  'matches:updated': [['matches'], ['timeline'], ['readiness'], ['battery-plan']],
-  'field:progressed': [['matches'], ['timeline'], ['readiness'], ['battery-plan']],
+  'events:updated': [['events'], ['team'], ['readiness'], ['battery-plan'], ['repairs']],
+  'matches:imported': SCHEDULE,
+  'matches:updated': SCHEDULE,
+  'field:progressed': SCHEDULE,
   'checks:templates-changed': [['checklist-templates'], ['checklist-template']],
   'checks:run-started': CHECK_RUNS,
   'checks:marked': CHECK_RUNS,
   'checks:signed-off': CHECK_RUNS,
   'batteries:changed': BATTERIES,
   'batteries:used': BATTERIES,
+  'repairs:created': REPAIRS,
+  'repairs:changed': REPAIRS,
+  'repairs:subsystems-changed': [['repair-subsystems']],
 };
 
 /**

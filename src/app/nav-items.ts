@@ -1,6 +1,6 @@
 import type { ComponentType, SVGProps } from 'react';
 import type { Capability } from '@shared/roles';
-import { BatteryIcon, BoardIcon, CalendarIcon, ChecksIcon, ScheduleIcon, TeamIcon } from '../components/ui/icons';
+import { BatteryIcon, BoardIcon, CalendarIcon, ChecksIcon, ScheduleIcon, TeamIcon, WrenchIcon } from '../components/ui/icons';
 
 export interface NavItem {
   to: string;
@@ -8,14 +8,20 @@ export interface NavItem {
   icon: ComponentType<SVGProps<SVGSVGElement>>;
   /** The read capability of the area; without it the item is not shown at all. */
   capability: Capability;
+  /**
+   * Used at every match, so kept in a phone's bottom bar; the others are one tap further, on
+   * the "More" page (a 360 px bar holds six items at most, and later areas still join).
+   */
+  primary: boolean;
 }
 
 // Only the areas that exist today; DESIGN §3 lists the others, which join as they are built.
 export const NAV_ITEMS: NavItem[] = [
-  { to: '/', label: 'Board', icon: BoardIcon, capability: 'board:read' },
-  { to: '/schedule', label: 'Schedule', icon: ScheduleIcon, capability: 'board:read' },
-  { to: '/checks', label: 'Checks', icon: ChecksIcon, capability: 'board:read' },
-  { to: '/batteries', label: 'Batteries', icon: BatteryIcon, capability: 'board:read' },
-  { to: '/events', label: 'Events', icon: CalendarIcon, capability: 'events:read' },
-  { to: '/team', label: 'Team', icon: TeamIcon, capability: 'team:read' },
+  { to: '/', label: 'Board', icon: BoardIcon, capability: 'board:read', primary: true },
+  { to: '/schedule', label: 'Schedule', icon: ScheduleIcon, capability: 'board:read', primary: true },
+  { to: '/checks', label: 'Checks', icon: ChecksIcon, capability: 'board:read', primary: true },
+  { to: '/batteries', label: 'Batteries', icon: BatteryIcon, capability: 'board:read', primary: true },
+  { to: '/repairs', label: 'Repairs', icon: WrenchIcon, capability: 'board:read', primary: true },
+  { to: '/events', label: 'Events', icon: CalendarIcon, capability: 'events:read', primary: false },
+  { to: '/team', label: 'Team', icon: TeamIcon, capability: 'team:read', primary: false },
 ];

@@ -12,11 +12,13 @@ import { sessionQueryOptions } from '../features/session/api/get-session';
 import { SignInPage } from '../features/session/components/sign-in-page';
 import { safeNext, signInPath } from '../lib/safe-next';
 import { AppShell } from './app-shell';
+import { MorePage } from './more-page';
 import { RequireCapability } from './require-capability';
 import { NotFound, RouteError } from './route-error';
 import { BatteriesRoute, BatteryLabelsRoute, BatteryRoute } from './routes/batteries-route';
 import { BoardRoute } from './routes/board-route';
 import { ChecksRoute, RunRoute } from './routes/checks-route';
+import { NewRepairRoute, RepairRoute, RepairsRoute, SubsystemsRoute } from './routes/repairs-route';
 import { ScheduleRoute } from './routes/schedule-route';
 import { ScreenRoute } from './routes/screen-route';
 import { TeamRoute } from './routes/team-route';
@@ -112,6 +114,22 @@ export function createAppRouter(queryClient: QueryClient) {
               element: guarded('board:read', <BatteryRoute />),
             },
             {
+              path: 'repairs',
+              element: guarded('board:read', <RepairsRoute />),
+            },
+            {
+              path: 'repairs/new',
+              element: guarded('repairs:work', <NewRepairRoute />),
+            },
+            {
+              path: 'repairs/subsystems',
+              element: guarded('repairs:manage', <SubsystemsRoute />),
+            },
+            {
+              path: 'repairs/:repairId',
+              element: guarded('board:read', <RepairRoute />),
+            },
+            {
               path: 'events',
               element: guarded('events:read', <EventsPage />),
             },
@@ -126,6 +144,11 @@ export function createAppRouter(queryClient: QueryClient) {
             {
               path: 'team',
               element: guarded('team:read', <TeamRoute />),
+            },
+            {
+              // The areas a phone's bottom bar has no room for.
+              path: 'more',
+              element: guarded('board:read', <MorePage />),
             },
             { path: '*', element: <NotFound /> },
           ],

@@ -6,10 +6,11 @@ import { BoardPage } from '../../features/board/components/board-page';
 import { NextMatchPanel } from '../../features/board/components/next-match-panel';
 import { NextMatchReadiness } from '../../features/checks/components/match-readiness';
 import { useEvents } from '../../features/events/api/get-events';
+import { NextMatchRepairs } from '../../features/repairs/components/next-match-repairs';
 import { useMatches } from '../../features/schedule/api/get-matches';
 import { useTimeline } from '../../features/schedule/api/get-timeline';
 
-/** The schedule feature's data, the checks feature's readiness and the batteries feature's plan, fed into the board's next-match panel. */
+/** The schedule feature's data, the checks feature's readiness, the batteries feature's plan and the repairs feature's blocking tickets, fed into the board's next-match panel. */
 function NextMatch({ event }: { event: EventJson }) {
   const timeline = useTimeline(event.id);
   const matches = useMatches(event.id);
@@ -21,11 +22,13 @@ function NextMatch({ event }: { event: EventJson }) {
       timeZone={event.timeZone}
       readinessOf={(matchId) => <NextMatchReadiness key={matchId} eventId={event.id} matchId={matchId} />}
       batteryOf={(matchId) => <NextMatchBattery key={matchId} eventId={event.id} matchId={matchId} timeZone={event.timeZone} />}
+      // Every open blocking ticket is needed by this match's queue call: the next one of ours.
+      repairsOf={() => <NextMatchRepairs eventId={event.id} />}
     />
   );
 }
 
-/** Feeds the events, schedule, checks and batteries features' data into the board, which must not import another feature. */
+/** Feeds the events, schedule, checks, batteries and repairs features' data into the board, which must not import another feature. */
 export function BoardRoute() {
   const events = useEvents();
   if (events.isPending) return <Loading label="Loading the board" />;

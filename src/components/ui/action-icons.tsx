@@ -49,3 +49,32 @@ export const TakeOutIcon = (p: IconProps) => (
     <path d="M12 14V3M7 8l5-5 5 5M4 17v3h16v-3" />
   </Icon>
 );
+
+export const CameraIcon = (p: IconProps) => (
+  <Icon {...p}>
+    <path d="M4 7h3l2-3h6l2 3h3a1 1 0 0 1 1 1v11a1 1 0 0 1-1 1H4a1 1 0 0 1-1-1V8a1 1 0 0 1 1-1z" />
+    <circle cx="12" cy="13" r="4" />
+  </Icon>
+);
+
+/** A photo that has no preview: a picture frame with a mountain. */
+export const PhotoIcon = (p: IconProps) => (
+  <Icon {...p}>
+    <rect x="3" y="4" width="18" height="16" rx="2" />
+    <circle cx="9" cy="9.5" r="1.5" />
+    <path d="M3 17l5-5 4 4 3-3 6 6" />
+  </Icon>
+);
+
+export const TrashIcon = (p: IconProps) => (
+  <Icon {...p}>
+    <path d="M4 7h16M10 11v6M14 11v6M6 7l1 13h10l1-13M9 7V4h6v3" />
+  </Icon>
+);
+
+/** Into the next column: an arrow to the right. */
+export const ArrowRightIcon = (p: IconProps) => (
+  <Icon {...p}>
+    <path d="M4 12h15M13 6l6 6-6 6" />
+  </Icon>
+);

@@ -199,3 +199,32 @@ export const BatteryIcon = (p: IconProps) => (
     <path d="M7 7V4.5h3V7M14 7V4.5h3V7M6.5 13.5h4M15 11.5v4M13 13.5h4" />
   </Icon>
 );
+
+/** Repairs: an open-ended wrench. */
+export const WrenchIcon = (p: IconProps) => (
+  <Icon {...p}>
+    <path d="M14.5 6.5a4 4 0 0 0 5.3 4.9L20.5 11l-9.8 9.8a2.1 2.1 0 0 1-3-3L17.5 8l-.4-.7a4 4 0 0 0-4.9-5.3l2.6 2.6-.3 1.9z" />
+  </Icon>
+);
+
+/** "More": three dots in a row. */
+export const MoreIcon = (p: IconProps) => (
+  <Icon {...p}>
+    <path d="M5 12h.01M12 12h.01M19 12h.01" strokeWidth={3.5} />
+  </Icon>
+);
+
+/** A stop sign's octagon with a bar: blocks the match (a shape of its own, never colour alone). */
+export const OctagonIcon = (p: IconProps) => (
+  <Icon {...p}>
+    <path d="M8.2 2.8h7.6l5.4 5.4v7.6l-5.4 5.4H8.2l-5.4-5.4V8.2z" />
+    <path d="M8 12h8" />
+  </Icon>
+);
+
+/** Cosmetic: a hollow circle, the quietest shape. */
+export const DotIcon = (p: IconProps) => (
+  <Icon {...p}>
+    <circle cx="12" cy="12" r="5" />
+  </Icon>
+);

@@ -11,13 +11,15 @@ interface StaleNoticeProps {
   onTakeTheirs: () => void;
   /** Their saved values. */
   children: ReactNode;
+  keepMineLabel?: string;
+  takeTheirsLabel?: string;
 }
 
 /**
  * Someone else saved a record while it was open here (a 409 `stale`): their values, and the two
  * ways on. The user's own input stays in the form below; nothing is lost either way.
  */
-export function StaleNotice({ what, intro, pending, onKeepMine, onTakeTheirs, children }: StaleNoticeProps) {
+export function StaleNotice({ what, intro, pending, onKeepMine, onTakeTheirs, children, keepMineLabel = 'Save mine over theirs', takeTheirsLabel = 'Use their version' }: StaleNoticeProps) {
   return (
     <div role="alert" className="flex flex-col gap-3 rounded-xl border-2 border-warning bg-warning-soft p-4 text-ink">
       <p className="flex items-center gap-2 text-lg font-bold">
@@ -27,10 +29,10 @@ export function StaleNotice({ what, intro, pending, onKeepMine, onTakeTheirs, ch
       {children}
       <div className="flex flex-wrap gap-3">
         <Button pending={pending} onClick={onKeepMine}>
-          Save mine over theirs
+          {keepMineLabel}
         </Button>
         <Button variant="secondary" onClick={onTakeTheirs}>
-          Use their version
+          {takeTheirsLabel}
         </Button>
       </div>
     </div>

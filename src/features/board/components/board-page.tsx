@@ -1,7 +1,7 @@
 import type { ReactNode } from 'react';
 import type { EventJson } from '@shared/schemas/events';
 import { LinkButton } from '../../../components/ui/button';
-import { CalendarIcon, PlusIcon } from '../../../components/ui/icons';
+import { CalendarIcon, PlusIcon, WrenchIcon } from '../../../components/ui/icons';
 import { useCan } from '../../../lib/authorization';
 import { CurrentEventCard } from './current-event-card';
 
@@ -48,9 +48,18 @@ export function BoardPage({
   hasEvents: boolean;
   nextMatch?: ReactNode;
 }) {
+  const canReport = useCan('repairs:work');
   return (
     <div className="flex flex-col gap-6">
       <h1 className="sr-only">Pit board</h1>
+      {/* Something broke: one tap from the board to the form (the repairs area's own page). */}
+      {currentEvent && canReport && (
+        <div className="flex justify-end">
+          <LinkButton to="/repairs/new" size="lg" icon={<WrenchIcon />} className="w-full sm:w-auto">
+            Report a problem
+          </LinkButton>
+        </div>
+      )}
       {currentEvent && nextMatch}
       {currentEvent ? <CurrentEventCard event={currentEvent} /> : <NoCurrentEvent hasEvents={hasEvents} />}
     </div>

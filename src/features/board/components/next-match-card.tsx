@@ -48,7 +48,7 @@ function Clock({ label, at, timeZone, now, loud }: { label: ReactNode; at: strin
   );
 }
 
-export function NextMatchCard({ match, teams, teamNumber, timeZone, readiness, battery }: {
+export function NextMatchCard({ match, teams, teamNumber, timeZone, readiness, battery, repairs }: {
   match: OurMatchJson;
   teams: MatchTeams | undefined;
   teamNumber: number;
@@ -57,6 +57,8 @@ export function NextMatchCard({ match, teams, teamNumber, timeZone, readiness, b
   readiness?: ReactNode;
   /** The battery planned for it and whether it is in the robot: filled by the route from the batteries feature. */
   battery?: ReactNode;
+  /** Open repairs that block it, with the minutes left: filled by the route from the repairs feature. */
+  repairs?: ReactNode;
 }) {
   const now = useServerNow(1000);
   const queueSoon = isQueueSoon(match.queueAt, now);
@@ -100,6 +102,8 @@ export function NextMatchCard({ match, teams, teamNumber, timeZone, readiness, b
       </div>
       {/* After the countdowns (what the whole pit times itself by), before the turnaround. */}
       {readiness && <div className="px-5 pb-5 sm:px-6 sm:pb-6">{readiness}</div>}
+      {/* What holds the robot back and whether it can be fixed in time; empty (and no gap) when nothing does. */}
+      {repairs && <div className="px-5 pb-5 empty:hidden sm:px-6 sm:pb-6">{repairs}</div>}
       {/* Empty for a team that does not track batteries: then no gap either. */}
       {battery && <div className="px-5 pb-5 empty:hidden sm:px-6 sm:pb-6">{battery}</div>}
       <div className="flex flex-wrap items-center gap-3 border-t border-line px-5 py-4 text-lg sm:px-6">

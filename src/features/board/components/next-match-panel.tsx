@@ -16,6 +16,8 @@ interface NextMatchPanelProps {
   readinessOf?: (matchId: string) => ReactNode;
   /** The battery planned for the next match, given its id (the route builds it from the batteries feature). */
   batteryOf?: (matchId: string) => ReactNode;
+  /** Open repairs that block the next match, given its id (the route builds it from the repairs feature). */
+  repairsOf?: (matchId: string) => ReactNode;
 }
 
 function Empty({ icon, title, children }: { icon: ReactNode; title: string; children: ReactNode }) {
@@ -29,7 +31,7 @@ function Empty({ icon, title, children }: { icon: ReactNode; title: string; chil
 }
 
 /** The top of the board: our next match, loudly, then the rest of ours. */
-export function NextMatchPanel({ timeline, matches, teamNumber, timeZone, readinessOf, batteryOf }: NextMatchPanelProps) {
+export function NextMatchPanel({ timeline, matches, teamNumber, timeZone, readinessOf, batteryOf, repairsOf }: NextMatchPanelProps) {
   if (timeline.isPending) return <Loading label="Loading our next match" />;
   if (timeline.isError) {
     return (
@@ -73,6 +75,7 @@ export function NextMatchPanel({ timeline, matches, teamNumber, timeZone, readin
         timeZone={timeZone}
         readiness={readinessOf?.(next.matchId)}
         battery={batteryOf?.(next.matchId)}
+        repairs={repairsOf?.(next.matchId)}
       />
       {matches.isError && (
         <ErrorNotice
