@@ -1,13 +1,15 @@
 /**
- * `npm run bench`: figures, no assertions. Four parts:
+ * `npm run bench`: figures, no assertions. Five parts:
  *  1. the timeline computation for 200 matches (median time per call, in-process);
  *  2. the battery rotation plan for 150 matches × 24 batteries × 6 bays, and with each doubled (in-process);
  *  3. request rates and latencies of the main reads against a running Pitwright (`npm start`);
- *  4. fan-out: from a field mark to its receipt on 50 connected sockets (p50, p95, p99).
+ *  4. fan-out: from a field mark to its receipt on 50 connected sockets (p50, p95, p99);
+ *  5. the repair board: its read at 20 connections, and card moves one after another (write → answer).
  * Loopback only. BENCH_URL (default http://127.0.0.1:5180), BENCH_SECONDS (5), BENCH_CONNECTIONS (20).
- * BENCH_ONLY picks parts by name (timeline, plan, reads, fanout; comma-separated): `BENCH_ONLY=plan
- * npm run bench` needs no server. Part 4 marks the demo's next match and undoes it again, so the
- * data ends as it began.
+ * BENCH_ONLY picks parts by name (timeline, plan, reads, fanout, repairs; comma-separated): `BENCH_ONLY=plan
+ * npm run bench` needs no server. Part 4 marks the demo's next match and undoes it again, and part 5
+ * moves a demo card back and forth an even number of times, so the data ends as it began (but for
+ * the card's version and history).
  */
 import autocannon from 'autocannon';
 import { io } from 'socket.io-client';
@@ -171,8 +173,38 @@ async function benchFanOut(viewer, lead, { clients = 50, writes = 20 } = {}) {
 
 if (runs('timeline')) benchTimeline();
 if (runs('plan')) benchPlan();
+async function benchRepairs(crew, { moves = 40 } = {}) {
+  const get = (path) => fetch(`${baseUrl}${path}`, { headers: { cookie: crew.cookie } }).then((r) => r.json());
+  const event = (await get('/api/events')).find((each) => each.current);
+  const path = `/api/events/${event.id}/repairs`;
+  const board = await autocannon({ url: `${baseUrl}${path}`, connections, duration, headers: { cookie: crew.cookie } });
+  const { repairs } = await get(path);
+  console.log(`repairs: the board of ${repairs.length} tickets, ${connections} connections, ${duration} s`);
+  console.log(`  ${Math.round(board.requests.average)} req/s, p50 ${board.latency.p50} ms, p99 ${board.latency.p99} ms, ${board.non2xx} non-2xx`);
+
+  const card = repairs.find((repair) => repair.status === 'reported');
+  if (!card) throw new Error('No reported card on the demo board to move');
+  let version = card.version;
+  const latencies = [];
+  for (let move = 0; move < moves; move++) {
+    const status = move % 2 === 0 ? 'in_progress' : 'reported';
+    const sentAt = performance.now();
+    const answer = await fetch(`${baseUrl}/api/repairs/${card.id}`, {
+      method: 'PATCH',
+      headers: { cookie: crew.cookie, 'x-csrf-token': crew.csrfToken, 'content-type': 'application/json' },
+      body: JSON.stringify({ status, version }),
+    });
+    if (!answer.ok) throw new Error(`Moving the card failed (${answer.status})`);
+    version = (await answer.json()).version;
+    latencies.push(performance.now() - sentAt);
+  }
+  latencies.sort((a, b) => a - b);
+  console.log(`  ${moves} card moves one after another: p50 ${ms(percentile(latencies, 50))} ms, p99 ${ms(percentile(latencies, 99))} ms\n`);
+}
+
 if (runs('reads') || runs('fanout')) {
   const viewer = await signIn('viewer');
   if (runs('reads')) await benchReads(viewer.cookie);
   if (runs('fanout')) await benchFanOut(viewer, await signIn('lead'));
 }
+if (runs('repairs')) await benchRepairs(await signIn('crew'));
