@@ -1,8 +1,9 @@
 import { generateKeyBetween, generateNKeysBetween } from 'fractional-indexing';
 import { Op, type Transaction } from 'sequelize';
+import { compareBoardOrder } from '../../shared/domain/repair-board';
 import { placeByUrgency, type RepairStatus, type UrgencyTicket } from '../../shared/domain/repair-urgency';
 import { Repair } from '../models';
-import { compareBoardOrder, urgencyTicketOf } from './board-order';
+import { urgencyTicketOf } from './board-order';
 
 /** The column of the order key: VARCHAR(64). */
 const ORDER_KEY_MAX = 64;

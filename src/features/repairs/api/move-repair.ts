@@ -1,8 +1,8 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { movedTicket } from '@shared/domain/repair-board';
 import type { ColumnPlace, RepairStatus } from '@shared/domain/repair-urgency';
 import type { RepairJson, RepairListJson } from '@shared/schemas/repairs';
 import { isDetailed, movesMutationKey, repairsQueryKey, staleRepair, withTicket, type MoveContext } from './repairs-cache';
-import { movedTicket } from './board-order';
 import { refreshAfterWrite, storeTicket, updateRepair, type RepairChanges } from './update-repair';
 
 export interface MoveRepairVariables {

@@ -1,7 +1,7 @@
 import type { Mutation, QueryClient } from '@tanstack/react-query';
+import { compareBoardOrder } from '@shared/domain/repair-board';
 import type { RepairJson, RepairListJson } from '@shared/schemas/repairs';
 import { isApiError } from '../../../lib/api-client';
-import { compareBoard } from './board-order';
 
 export const repairsQueryKey = (eventId: string) => ['repairs', eventId] as const;
 export const repairQueryKey = (id: string) => ['repair', id] as const;
@@ -16,7 +16,7 @@ export const isDetailed = (list: RepairListJson | undefined): list is DetailedLi
 /** The list with one ticket replaced (or added), kept in board order. */
 export function withTicket(list: RepairListJson, ticket: RepairJson): RepairListJson {
   if (!isDetailed(list)) return list;
-  const repairs = [...list.repairs.filter((other) => other.id !== ticket.id), ticket].sort(compareBoard);
+  const repairs = [...list.repairs.filter((other) => other.id !== ticket.id), ticket].sort(compareBoardOrder);
   return { ...list, repairs };
 }
 

@@ -1,6 +1,6 @@
 import type { Announcements, UniqueIdentifier } from '@dnd-kit/core';
+import type { Landing } from '@shared/domain/repair-board';
 import type { RepairStatus } from '@shared/domain/repair-urgency';
-import type { Landing } from './drop-target';
 import { STATUS_LABELS } from './repair-words';
 
 export interface AnnouncementSource {

@@ -1,9 +1,9 @@
 import { Link } from 'react-router';
+import { columnsOf } from '@shared/domain/repair-board';
 import { urgencyOf } from '@shared/domain/repair-urgency';
 import { LinkButton } from '../../../components/ui/button';
 import { OctagonIcon, WrenchIcon } from '../../../components/ui/icons';
 import { useServerNow } from '../../../lib/server-clock';
-import { columnsOf } from '../api/board-order';
 import { useRepairs } from '../api/get-repairs';
 import { isDetailed } from '../api/repairs-cache';
 import { STATUS_LABELS } from './repair-words';

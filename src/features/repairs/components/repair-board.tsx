@@ -11,16 +11,16 @@ import {
   type DragStartEvent,
   type UniqueIdentifier,
 } from '@dnd-kit/core';
+import { landingOf, positionIn, type DropTarget, type Landing } from '@shared/domain/repair-board';
 import { REPAIR_STATUSES, type RepairStatus } from '@shared/domain/repair-urgency';
 import type { RepairJson } from '@shared/schemas/repairs';
 import { DragHandle } from '../../../components/ui/drag-handle';
 import { useDragSensors } from '../../../components/ui/drag-sensors';
 import { usePrefersReducedMotion } from '../../../lib/use-reduced-motion';
-import { positionIn } from '../api/board-order';
 import { staleRepair } from '../api/repairs-cache';
 import { useMoveRepair, type MoveRepairVariables } from '../api/move-repair';
 import { boardAnnouncements, screenReaderInstructions } from './board-announcements';
-import { indexAtY, landingOf, statusOfColumnId, type DropTarget, type Landing } from './drop-target';
+import { indexAtY, statusOfColumnId } from './drop-target';
 import { MoveNotice, type MoveProblem } from './move-notice';
 import { RepairCard, type CardFacts } from './repair-card';
 import { RepairColumn } from './repair-column';

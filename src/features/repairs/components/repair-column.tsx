@@ -1,12 +1,13 @@
 import { useState, type ReactNode } from 'react';
 import { useDroppable } from '@dnd-kit/core';
 import { SortableContext, useSortable, type SortingStrategy } from '@dnd-kit/sortable';
+import type { Landing } from '@shared/domain/repair-board';
 import type { RepairStatus } from '@shared/domain/repair-urgency';
 import type { RepairJson } from '@shared/schemas/repairs';
 import { Button } from '../../../components/ui/button';
 import { DragHandle } from '../../../components/ui/drag-handle';
 import { RepairCard, type CardFacts } from './repair-card';
-import { columnDropId, type Landing } from './drop-target';
+import { columnDropId } from './drop-target';
 import { STATUS_LABELS, ticketName } from './repair-words';
 
 // Cards do not shuffle while one is dragged: a line shows where it will land, since for the crew

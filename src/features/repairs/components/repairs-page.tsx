@@ -1,4 +1,5 @@
 import { useMemo } from 'react';
+import { columnsOf } from '@shared/domain/repair-board';
 import { REPAIR_STATUSES } from '@shared/domain/repair-urgency';
 import type { RepairJson, RepairListJson, RepairSummaryJson } from '@shared/schemas/repairs';
 import { LinkButton } from '../../../components/ui/button';
@@ -10,7 +11,6 @@ import { useCan, useViewer } from '../../../lib/authorization';
 import { formatZonedTime } from '../../../lib/dates';
 import { formatMinutes } from '../../../lib/match-labels';
 import { useServerNow } from '../../../lib/server-clock';
-import { columnsOf } from '../api/board-order';
 import { subsystemLabel, useSubsystems } from '../api/get-subsystems';
 import { useRepairs } from '../api/get-repairs';
 import { isDetailed } from '../api/repairs-cache';
