@@ -5,7 +5,7 @@ import { stale } from '../errors';
 import { Repair, RepairChange, Team } from '../models';
 import type { ChangeSet } from '../models/repair-change';
 import { presentRepair } from '../presenters/repair';
-import { urgencyTicketOf } from '../repairs/board-order';
+import { urgencyTicketOf } from '../repairs/urgency-ticket';
 import { columnOf, keyForSlot, urgencySlot } from '../repairs/placement';
 import { invalidReferences, type References } from '../repairs/references';
 import { assertNoInvalidFields } from './input-guards';

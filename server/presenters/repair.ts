@@ -10,7 +10,7 @@ import type {
   RepairSummaryJson,
 } from '../../shared/schemas/repairs';
 import { Event, RepairChange, RepairPhoto, User, type Repair } from '../models';
-import { urgencyTicketOf } from '../repairs/board-order';
+import { urgencyTicketOf } from '../repairs/urgency-ticket';
 import { nextQueueOf } from '../repairs/next-queue';
 
 type People = Map<string, PersonJson>;

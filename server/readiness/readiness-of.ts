@@ -10,7 +10,7 @@ import { Battery, BatteryUse, ChecklistRun, Repair, type Event } from '../models
 import { presentRuns } from '../presenters/checklist';
 import { timelineSettingsOf } from '../presenters/event';
 import { presentSchedule } from '../presenters/match';
-import { urgencyTicketOf } from '../repairs/board-order';
+import { urgencyTicketOf } from '../repairs/urgency-ticket';
 
 /**
  * Readiness of one of our matches at `now`: gathers the facts `computeReadiness` reads: the

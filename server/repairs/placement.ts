@@ -3,7 +3,7 @@ import { Op, type Transaction } from 'sequelize';
 import { compareBoardOrder } from '../../shared/domain/repair-board';
 import { placeByUrgency, type RepairStatus, type UrgencyTicket } from '../../shared/domain/repair-urgency';
 import { Repair } from '../models';
-import { urgencyTicketOf } from './board-order';
+import { urgencyTicketOf } from './urgency-ticket';
 
 /** The column of the order key: VARCHAR(64). */
 const ORDER_KEY_MAX = 64;

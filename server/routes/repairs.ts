@@ -1,4 +1,5 @@
 import { Router } from 'express';
+import { compareBoardOrder } from '../../shared/domain/repair-board';
 import { can } from '../../shared/roles';
 import { createRepairSchema, eventRepairsParams, repairParams, updateRepairSchema, type RepairListJson } from '../../shared/schemas/repairs';
 import { timelineQuery } from '../../shared/schemas/schedule';
@@ -8,7 +9,6 @@ import { updateRepair } from '../commands/update-repair';
 import { Event, Repair } from '../models';
 import { authorize } from '../policies/authorize';
 import { presentRepairDetail, presentRepairs, presentRepairSummary } from '../presenters/repair';
-import { compareBoardOrder } from '../repairs/board-order';
 import { nextQueueOf } from '../repairs/next-queue';
 
 /** The repair board of one event: mounted at /api/events/:eventId/repairs. */

@@ -1,8 +1,6 @@
 import type { UrgencyTicket } from '../../shared/domain/repair-urgency';
 import type { Repair } from '../models';
 
-export { compareBoardOrder } from '../../shared/domain/repair-board';
-
 /** What urgency reads of a ticket, with whether a lead placed it. */
 export const urgencyTicketOf = (repair: Repair): UrgencyTicket & { placedByHand: boolean } => ({
   id: repair.id,
