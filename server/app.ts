@@ -43,13 +43,7 @@ export function createApp({ config, sequelize }: { config: Config; sequelize: Se
   app.use(
     helmet({
       // A pit network is often plain http on a LAN: never rewrite requests to https.
-      contentSecurityPolicy: {
-        directives: {
-          upgradeInsecureRequests: null,
-          // blob: for the preview of a photo picked on the tablet before it is uploaded.
-          imgSrc: ["'self'", 'data:', 'blob:'],
-        },
-      },
+      contentSecurityPolicy: { directives: { upgradeInsecureRequests: null } },
       strictTransportSecurity: false,
     }),
   );

@@ -95,8 +95,8 @@ describe('uploading a photo', () => {
     expect(full.headers['x-content-type-options']).toBe('nosniff');
     expect(full.headers['content-disposition']).toBe('inline');
     expect(full.headers['cache-control']).toBe('private, max-age=31536000, immutable');
-    // The page may show a photo picked on the tablet (a blob: URL) before it is uploaded.
-    expect(full.headers['content-security-policy']).toMatch(/img-src 'self' data: blob:/);
+    // A photo opened on its own tab loads nothing from elsewhere.
+    expect(full.headers['content-security-policy']).toMatch(/default-src 'self'/);
     expect(full.body.length).toBe(photo.byteSize);
     const served = await sharp(full.body).metadata();
     expect([served.format, served.width, served.height, served.exif, served.orientation]).toEqual(['jpeg', 48, 64, undefined, undefined]);
