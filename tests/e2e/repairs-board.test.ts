@@ -119,6 +119,45 @@ it('a card moves with the keyboard: Space on its handle, an arrow to the next co
   }
 });
 
+it('on a tablet, a finger held on the handle drags a card into Needs test; a quick swipe over it moves nothing', async () => {
+  const ticket = await makeRepair(crew, team.event.id, { title: 'Elevator cable frayed', subsystem: 'elevator', severity: 'degraded' });
+  const { context, page } = await openPage(harness.browser, TABLET, '/repairs');
+  try {
+    const cdp = await context.newCDPSession(page);
+    const touch = (type: 'touchStart' | 'touchMove' | 'touchEnd', x: number, y: number) =>
+      cdp.send('Input.dispatchTouchEvent', { type, touchPoints: type === 'touchEnd' ? [] : [{ x, y }] });
+    const slide = async (from: { x: number; y: number }, to: { x: number; y: number }) => {
+      for (let step = 1; step <= 12; step += 1) await touch('touchMove', from.x + ((to.x - from.x) * step) / 12, from.y + ((to.y - from.y) * step) / 12);
+      await touch('touchEnd', to.x, to.y);
+    };
+    // Measured each time: the swipe scrolls the page.
+    const handleMiddle = async () => {
+      const handle = page.getByRole('button', { name: 'Move ‘Elevator cable frayed’' });
+      await handle.scrollIntoViewIfNeeded();
+      const box = (await handle.boundingBox())!;
+      return { x: box.x + box.width / 2, y: box.y + box.height / 2 };
+    };
+
+    // A swipe up that starts on the handle at once is a scroll, not a drag: nothing moves.
+    const swipeFrom = await handleMiddle();
+    await touch('touchStart', swipeFrom.x, swipeFrom.y);
+    await slide(swipeFrom, { x: swipeFrom.x, y: swipeFrom.y - 200 });
+    await page.waitForTimeout(500);
+    expect((await ticketOnServer(ticket.id)).status).toBe('reported');
+
+    // Held still past the sensor's delay, then moved across: the card goes.
+    const start = await handleMiddle();
+    const target = (await column(page, 'Needs test').boundingBox())!;
+    await touch('touchStart', start.x, start.y);
+    await page.waitForTimeout(400);
+    await slide(start, { x: target.x + target.width / 2, y: start.y });
+    await column(page, 'Needs test').getByRole('link', { name: 'Elevator cable frayed' }).waitFor();
+    await expect.poll(async () => (await ticketOnServer(ticket.id)).status).toBe('needs_test');
+  } finally {
+    await context.close();
+  }
+});
+
 it('on a tablet, a problem is reported from the board in two taps, with a photo from the camera, and its card shows the thumbnail', async () => {
   const photo = await sharp({ create: { width: 320, height: 240, channels: 3, background: '#b45309' } }).png().toBuffer();
   const { context, page } = await openPage(harness.browser, TABLET, '/');

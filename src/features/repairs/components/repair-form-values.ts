@@ -45,7 +45,12 @@ export function readReport(values: ReportValues, id: string): { ok: true; data: 
     assigneeId: values.assigneeId || null,
     estimateMinutes: readMinutes(values.estimate),
   });
-  return parsed.ok ? { ok: true, data: { ...parsed.data, id } } : parsed;
+  if (parsed.ok) return { ok: true, data: { ...parsed.data, id } };
+  // The choices are buttons: say what to tap rather than "Required".
+  const errors = { ...parsed.errors };
+  if (errors.subsystem === 'Required') errors.subsystem = 'Tap the subsystem';
+  if (errors.severity === 'Required') errors.severity = 'Tap how bad it is';
+  return { ok: false, errors };
 }
 
 // ---- Editing a ticket ----
