@@ -26,10 +26,10 @@ beforeAll(async () => {
   expect((await lead.post(`/api/events/${team.event.id}/matches`, ours)).status).toBe(201);
 });
 
-async function openPage(browser: Browser, viewport: { width: number; height: number }, at: string) {
+async function openPage(browser: Browser, viewport: { width: number; height: number }, at: string, email = team.emails.crew) {
   const context = await browser.newContext({ viewport, hasTouch: viewport.width < 1024 });
   const page = await context.newPage();
-  await fillSignIn(page, harness.baseUrl, team.emails.crew, PASSWORD);
+  await fillSignIn(page, harness.baseUrl, email, PASSWORD);
   await page.getByText('Live', { exact: true }).waitFor();
   await page.goto(`${harness.baseUrl}${at}`);
   // The socket is signed in again after the page load: changes from now on reach the page.
@@ -153,6 +153,38 @@ it('on a tablet, a finger held on the handle drags a card into Needs test; a qui
     await slide(start, { x: target.x + target.width / 2, y: start.y });
     await column(page, 'Needs test').getByRole('link', { name: 'Elevator cable frayed' }).waitFor();
     await expect.poll(async () => (await ticketOnServer(ticket.id)).status).toBe('needs_test');
+  } finally {
+    await context.close();
+  }
+});
+
+it('a lead drags a cosmetic card above a degraded one in its column, and it stays there, placed by hand', async () => {
+  const upper = await makeRepair(crew, team.event.id, { title: 'Wheel hub bolt loose', subsystem: 'drivetrain', severity: 'degraded' });
+  const lower = await makeRepair(crew, team.event.id, { title: 'Scratched side panel', subsystem: 'other', severity: 'cosmetic' });
+  const reported = async () => (await boardOf(crew, team.event.id)).repairs.filter((repair) => repair.status === 'reported').map((repair) => repair.title);
+  // Urgency puts the cosmetic card below the degraded one.
+  const before = await reported();
+  expect(before.indexOf('Scratched side panel')).toBeGreaterThan(before.indexOf('Wheel hub bolt loose'));
+  // Tall enough that both cards are in view without scrolling: the drag goes by screen position.
+  const { context, page } = await openPage(harness.browser, { width: 1280, height: 1600 }, '/repairs', team.emails.lead);
+  try {
+    const from = (await page.getByRole('button', { name: 'Move ‘Scratched side panel’' }).boundingBox())!;
+    const card = (await column(page, 'Reported').locator(`[data-repair-card="${upper.id}"]`).boundingBox())!;
+    await page.mouse.move(from.x + from.width / 2, from.y + from.height / 2);
+    await page.mouse.down();
+    // Up by the distance between the two cards' tops and a little more: its middle is then above the other's.
+    await page.mouse.move(from.x + from.width / 2, from.y + from.height / 2 - (from.y - card.y) - 40, { steps: 16 });
+    await page.locator('[data-column="reported"] [data-lands-here]').waitFor({ state: 'attached' });
+    await page.mouse.up();
+
+    await expect.poll(async () => (await ticketOnServer(lower.id)).placedByHand).toBe(true);
+    const after = await reported();
+    expect(after.indexOf('Scratched side panel')).toBe(after.indexOf('Wheel hub bolt loose') - 1);
+    expect((await ticketOnServer(lower.id)).history[0]).toMatchObject({ kind: 'placed' });
+    await column(page, 'Reported').locator(`[data-repair-card="${lower.id}"]`).getByText('Placed here by a lead').waitFor();
+    // The page shows the server's order.
+    const titles = await column(page, 'Reported').getByRole('heading', { level: 3 }).allInnerTexts();
+    expect(titles).toEqual(after);
   } finally {
     await context.close();
   }
