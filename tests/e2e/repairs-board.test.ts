@@ -280,3 +280,70 @@ it('a move based on an old version is not made: the card shows where the other p
     await context.close();
   }
 });
+
+it('two cards moved one after the other while the first move is still on its way both finish saving: neither stays stuck', async () => {
+  const first = await makeRepair(crew, team.event.id, { title: 'Gear guard cracked', subsystem: 'drivetrain', severity: 'degraded' });
+  const second = await makeRepair(crew, team.event.id, { title: 'Camera mount loose', subsystem: 'software', severity: 'cosmetic' });
+  const { context, page } = await openPage(harness.browser, DESKTOP, '/repairs');
+  try {
+    // Arena Wi-Fi: the first move's answer is slow to come.
+    let release!: () => void;
+    const held = new Promise<void>((resolve) => (release = resolve));
+    await page.route(`**/api/repairs/${first.id}`, async (route) => {
+      if (route.request().method() === 'PATCH') await held;
+      await route.continue();
+    });
+    const moveRight = async (title: string) => {
+      await page.getByRole('button', { name: `Move ‘${title}’` }).focus();
+      await page.keyboard.press('Space');
+      await page.getByText(new RegExp(`^Picked up ticket ${title}`)).waitFor({ state: 'attached' });
+      await page.evaluate(() => new Promise((resolve) => setTimeout(resolve, 50)));
+      await page.keyboard.press('ArrowRight');
+      await page.getByText(new RegExp(`^Moved ${title} to In progress`)).waitFor({ state: 'attached' });
+      await page.keyboard.press('Space');
+    };
+    const card = (id: string) => page.locator(`[data-repair-card="${id}"]`);
+
+    await moveRight('Gear guard cracked');
+    await card(first.id).getByText('Saving the move…').waitFor();
+    await moveRight('Camera mount loose');
+    await expect.poll(async () => (await ticketOnServer(second.id)).status).toBe('in_progress');
+    await card(second.id).getByText('Saving the move…').waitFor({ state: 'detached' });
+
+    release();
+    await expect.poll(async () => (await ticketOnServer(first.id)).status).toBe('in_progress');
+    await column(page, 'In progress').getByRole('link', { name: 'Gear guard cracked' }).waitFor();
+    // The first card's move is confirmed: no spinner left, and its handle works again.
+    await card(first.id).getByText('Saving the move…').waitFor({ state: 'detached', timeout: 5_000 });
+    expect(await page.getByRole('button', { name: 'Move ‘Gear guard cracked’' }).getAttribute('aria-disabled')).toBeNull();
+  } finally {
+    await context.close();
+  }
+});
+
+it('a move the server refuses goes back where it was and stays there, even after the board is read again', async () => {
+  const ticket = await makeRepair(crew, team.event.id, { title: 'Limit switch wire cut', subsystem: 'electrical', severity: 'degraded' });
+  const { context, page } = await openPage(harness.browser, DESKTOP, '/repairs');
+  try {
+    await page.route(`**/api/repairs/${ticket.id}`, (route) =>
+      route.request().method() === 'PATCH'
+        ? route.fulfill({ status: 500, contentType: 'application/json', body: JSON.stringify({ error: { code: 'internal', message: 'Something went wrong on the server.' } }) })
+        : route.continue(),
+    );
+    await page.getByRole('button', { name: 'Move ‘Limit switch wire cut’' }).focus();
+    await page.keyboard.press('Space');
+    await page.getByText(/^Picked up ticket Limit switch wire cut/).waitFor({ state: 'attached' });
+    await page.evaluate(() => new Promise((resolve) => setTimeout(resolve, 50)));
+    await page.keyboard.press('ArrowRight');
+    await page.getByText(/^Moved Limit switch wire cut to In progress/).waitFor({ state: 'attached' });
+    await page.keyboard.press('Space');
+
+    await page.getByRole('alert').filter({ hasText: '‘Limit switch wire cut’ was not moved to In progress. It is back where it was.' }).waitFor();
+    // The notice comes once the board has been read again after the refusal: the card is in Reported, as on the server.
+    await column(page, 'Reported').getByRole('link', { name: 'Limit switch wire cut' }).waitFor();
+    expect(await column(page, 'In progress').getByRole('link', { name: 'Limit switch wire cut' }).count()).toBe(0);
+    expect((await ticketOnServer(ticket.id)).status).toBe('reported');
+  } finally {
+    await context.close();
+  }
+});

@@ -168,3 +168,18 @@ it('a lead adds, renames and reorders subsystems, and the report form offers the
     { key: 'other', label: 'Misc' },
   ]);
 });
+
+it('after a move by button the focus stays among the move buttons (the pressed one is gone) and the move is announced', async () => {
+  const ticket = await makeRepair(crew, team.event.id, { title: 'Shooter flywheel wobbles', subsystem: 'arm', severity: 'degraded' });
+  await withPage({ width: 1280, height: 800 }, async (page) => {
+    await page.goto(`${harness.baseUrl}/repairs/${ticket.id}`);
+    await page.getByRole('heading', { level: 1, name: 'Shooter flywheel wobbles' }).waitFor();
+    await page.getByRole('button', { name: 'Move to In progress' }).focus();
+    await page.keyboard.press('Enter');
+    await page.getByRole('status').filter({ hasText: 'Moved to In progress.' }).waitFor();
+    await expect
+      .poll(() => page.evaluate(() => document.activeElement?.closest('section[aria-label="Move to another column"]') !== null && document.activeElement?.tagName === 'BUTTON'))
+      .toBe(true);
+  });
+  expect((await onServer(ticket.id)).status).toBe('in_progress');
+});

@@ -48,6 +48,8 @@ export function useMoveRepair(eventId: string) {
       storeTicket(queryClient, answer);
     },
     onError: (error, _variables, context) => {
+      // The refetch in onSettled must not lay the refused move over the server's list again.
+      if (context) context.failed = true;
       const theirs = staleRepair(error);
       if (theirs) return storeTicket(queryClient, theirs);
       if (!context) return;

@@ -33,6 +33,8 @@ export interface MoveContext {
   optimistic: RepairJson;
   /** The server's answer, once in (the mutation still counts as pending while its callbacks run). */
   confirmed?: RepairJson;
+  /** Refused by the server (the mutation still counts as pending while its rollback and refetch run): nothing to lay over. */
+  failed?: boolean;
 }
 
 type MoveMutation = Mutation<RepairJson, Error, unknown, MoveContext>;
@@ -48,7 +50,7 @@ export function withPendingMoves(list: RepairListJson, client: QueryClient, even
   let result: RepairListJson = list;
   for (const mutation of pending) {
     const context = mutation.state.context;
-    if (!context) continue;
+    if (!context || context.failed) continue;
     const onServer = list.repairs.find((ticket) => ticket.id === context.previous.id);
     if (!onServer) continue;
     if (context.confirmed) {

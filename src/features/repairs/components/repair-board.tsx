@@ -114,20 +114,23 @@ export function RepairBoard({ eventId, tickets, shown, facts, canWork, canPlaceB
     const id = variables.ticket.id;
     setSavingIds((old) => new Set(old).add(id));
     if (keyboard) refocus.current = { id, status: variables.status };
-    move.mutate(variables, {
-      onError: (error) => {
+    // Per call, not `mutate(variables, { onError, onSettled })`: those fire for the latest call
+    // only, so a card moved while another's move was on its way would stay "saving" for good.
+    move
+      .mutateAsync(variables)
+      .catch((error: unknown) => {
         const theirs = staleRepair(error);
         // Back in its old column, or where the other person put it: the focus goes along.
         if (keyboard) refocus.current = { id, status: theirs?.status ?? variables.ticket.status };
         setProblem({ error, variables, theirs });
-      },
-      onSettled: () =>
+      })
+      .finally(() =>
         setSavingIds((old) => {
           const next = new Set(old);
           next.delete(id);
           return next;
         }),
-    });
+      );
   }
 
   function onDragStart({ active: dragged }: DragStartEvent) {

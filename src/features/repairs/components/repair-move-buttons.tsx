@@ -1,4 +1,4 @@
-import { useState } from 'react';
+import { useEffect, useRef, useState } from 'react';
 import { REPAIR_NOTE_MAX, type RepairJson } from '@shared/schemas/repairs';
 import { REPAIR_STATUSES, type RepairStatus } from '@shared/domain/repair-urgency';
 import { ArrowRightIcon } from '../../../components/ui/action-icons';
@@ -77,16 +77,32 @@ export function RepairMoveButtons({ ticket }: { ticket: RepairJson }) {
   const update = useUpdateRepair(ticket);
   const [asking, setAsking] = useState(false);
   const [target, setTarget] = useState<RepairStatus | null>(null);
+  // The pressed button goes with the move (no button for the column it is in): the focus moves to
+  // the first button left, and the move is said, rather than the focus falling to the page.
+  const buttonsRef = useRef<HTMLDivElement>(null);
+  const [moved, setMoved] = useState<{ status: RepairStatus; count: number } | null>(null);
+  useEffect(() => {
+    if (moved) buttonsRef.current?.querySelector<HTMLElement>('button')?.focus();
+  }, [moved]);
 
   function move(status: RepairStatus, extra: Omit<RepairChanges, 'version' | 'status'> = {}, base: RepairJson = ticket) {
     setTarget(status);
-    update.mutate({ version: base.version, status, ...extra }, { onSuccess: () => setAsking(false) });
+    setMoved(null);
+    update.mutate(
+      { version: base.version, status, ...extra },
+      {
+        onSuccess: (answer) => {
+          setAsking(false);
+          setMoved((old) => ({ status: answer.status, count: (old?.count ?? 0) + 1 }));
+        },
+      },
+    );
   }
 
   const stale = update.error && target && !asking;
   return (
     <section aria-label="Move to another column" className="flex flex-col gap-3">
-      <div className="flex flex-wrap gap-3">
+      <div ref={buttonsRef} className="flex flex-wrap gap-3">
         {REPAIR_STATUSES.filter((status) => status !== ticket.status).map((status) => (
           <Button
             key={status}
@@ -104,6 +120,9 @@ export function RepairMoveButtons({ ticket }: { ticket: RepairJson }) {
           </Button>
         ))}
       </div>
+      <p role="status" className="font-semibold text-ink-muted empty:hidden">
+        {moved ? `Moved to ${STATUS_LABELS[moved.status]}.` : ''}
+      </p>
       {stale && (
         <MoveNotice
           problem={{ error: update.error, variables: { ticket, status: target, byHand: null } }}

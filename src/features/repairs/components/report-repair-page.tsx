@@ -65,6 +65,11 @@ export function ReportRepairPage({ eventId, matches, defaultMatchId, assignees }
     setPhoto(problem ? null : file);
   }
 
+  function retakePhoto(file: File) {
+    pick(file);
+    if (!photoProblem(file)) sendPhoto(file);
+  }
+
   const uploadMessage = upload.error ? (isApiError(upload.error) ? (upload.error.fields.photo ?? upload.error.message) : upload.error.message) : null;
   const saveProblem = create.error && !(isApiError(create.error, 'invalid') && Object.keys(errors).length > 0) ? create.error : null;
 
@@ -124,7 +129,7 @@ export function ReportRepairPage({ eventId, matches, defaultMatchId, assignees }
                   Try the photo again
                 </Button>
               )}
-              <PhotoPicker label="Take another photo" onPick={(file) => !photoProblem(file) && (setPhoto(file), sendPhoto(file))} pending={upload.isPending} />
+              <PhotoPicker label="Take another photo" onPick={retakePhoto} pending={upload.isPending} />
               <LinkButton to={`/repairs/${id}`} variant="quiet">
                 Open the ticket without it
               </LinkButton>
