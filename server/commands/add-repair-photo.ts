@@ -1,4 +1,5 @@
 import { randomUUID } from 'node:crypto';
+import type { Transaction } from 'sequelize';
 import { REPAIR_PHOTOS_MAX } from '../../shared/schemas/repairs';
 import { inTransaction } from '../db/transaction';
 import { HttpError } from '../errors';
@@ -8,11 +9,11 @@ import type { ProcessedPhoto } from '../repairs/photo-processing';
 import type { PhotoStore } from '../repairs/photo-store';
 import { announceChanged } from './repair-announce';
 
-export const tooManyPhotos = () => new HttpError(409, 'too_many_photos', `A ticket keeps at most ${REPAIR_PHOTOS_MAX} photos: remove one first`);
+const tooManyPhotos = () => new HttpError(409, 'too_many_photos', `A ticket keeps at most ${REPAIR_PHOTOS_MAX} photos: remove one first`);
 
-/** 409 when the ticket already has its photos; checked again under the team's lock when one is added. */
-export async function assertRoomForPhoto(repairId: string) {
-  if ((await RepairPhoto.count({ where: { repairId } })) >= REPAIR_PHOTOS_MAX) throw tooManyPhotos();
+/** 409 when the ticket already has its photos; checked before the upload is read, and again under the team's lock when one is added. */
+export async function assertRoomForPhoto(repairId: string, transaction?: Transaction) {
+  if ((await RepairPhoto.count({ where: { repairId }, transaction })) >= REPAIR_PHOTOS_MAX) throw tooManyPhotos();
 }
 
 /**
@@ -28,7 +29,7 @@ export async function addRepairPhoto(teamId: string, userId: string, repairId: s
       await Team.lockRow(teamId, transaction);
       const repair = await Repair.ofTeam(teamId, repairId, { transaction });
       // Under the lock: two uploads of the 6th photo at once cannot both pass.
-      if ((await RepairPhoto.count({ where: { repairId: repair.id }, transaction })) >= REPAIR_PHOTOS_MAX) throw tooManyPhotos();
+      await assertRoomForPhoto(repair.id, transaction);
       const now = new Date();
       const row = await RepairPhoto.create(
         {

@@ -4,11 +4,10 @@ import { inTransaction } from '../db/transaction';
 import { HttpError } from '../errors';
 import { Event, Repair, RepairChange, Team } from '../models';
 import { presentRepair } from '../presenters/repair';
-import { emitToEvent } from '../realtime/broadcast';
 import { columnOf, keyForSlot, urgencySlot } from '../repairs/placement';
 import { invalidReferences } from '../repairs/references';
 import { assertNoInvalidFields } from './input-guards';
-import { announceRekeyed } from './repair-announce';
+import { announceCreated, announceRekeyed } from './repair-announce';
 
 /**
  * Reports a problem on the event's board: in `reported`, where urgency puts it, reported by the
@@ -44,7 +43,7 @@ export async function createRepair(teamId: string, userId: string, eventId: stri
     ) as Record<string, [unknown, unknown]>;
     await RepairChange.create({ repairId: repair.id, kind: 'created', changes: reported, byId: userId, at: now }, { transaction });
     transaction.afterCommit(() => {
-      emitToEvent(event.id, 'repairs:created', { id: repair.id, eventId: event.id });
+      announceCreated(repair);
       announceRekeyed(rekeyed);
     });
     return { repair: await presentRepair(repair, transaction, now), created: true };

@@ -57,9 +57,10 @@ export async function readinessOnTimeline(
  */
 async function blockingRepairsOf(event: Event, queueAt: string | null, now: Date, transaction?: Transaction): Promise<ReadinessFacts['blockingRepairs']> {
   const repairs = await Repair.findAll({ where: { eventId: event.id, severity: 'blocks_match', status: { [Op.ne]: 'done' } }, transaction });
-  const tickets = repairs.map(urgencyTicketOf).sort(compareUrgency);
-  const titles = new Map(repairs.map((repair) => [repair.id, repair.title]));
-  return tickets.map((ticket) => ({ id: ticket.id, title: titles.get(ticket.id)!, late: urgencyOf(ticket, queueAt, now).late }));
+  return repairs
+    .map((repair) => ({ repair, ticket: urgencyTicketOf(repair) }))
+    .sort((a, b) => compareUrgency(a.ticket, b.ticket))
+    .map(({ repair, ticket }) => ({ id: repair.id, title: repair.title, late: urgencyOf(ticket, queueAt, now).late }));
 }
 
 /**
