@@ -38,6 +38,9 @@ export const CAPABILITIES = {
   'batteries:manage': ['admin', 'battery'],
   'incidents:report': ['admin', 'lead', 'crew', 'battery', 'safety', 'viewer'],
   'incidents:read': ['admin', 'safety'],
+  // Editing a report: follow-ups, closing, photos of any report.
+  'incidents:manage': ['admin', 'safety'],
+  // Alert rules, and the alerts that could not be delivered.
   'alerts:manage': ['admin', 'safety'],
   'mailbox:read': ['admin'],
   'screens:manage': ['admin'],

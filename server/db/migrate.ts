@@ -6,6 +6,7 @@ import * as screenTokens from './migrations/20261202-0002-screen-tokens';
 import * as checklists from './migrations/20261203-0001-checklists';
 import * as batteries from './migrations/20261204-0001-batteries';
 import * as repairs from './migrations/20261205-0001-repairs';
+import * as safetyAndMail from './migrations/20261206-0001-safety-and-mail';
 
 // Listed by hand, in order: a glob would change meaning with the build layout.
 const MIGRATIONS = [
@@ -15,6 +16,7 @@ const MIGRATIONS = [
   { name: '20261203-0001-checklists', ...checklists },
   { name: '20261204-0001-batteries', ...batteries },
   { name: '20261205-0001-repairs', ...repairs },
+  { name: '20261206-0001-safety-and-mail', ...safetyAndMail },
 ];
 
 /** The migrator for one database; `up()` applies what is missing, `down()` steps back. */

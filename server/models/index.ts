@@ -1,4 +1,6 @@
 import type { Sequelize } from 'sequelize';
+import { AccountLink } from './account-link';
+import { AlertRule } from './alert-rule';
 import { Battery } from './battery';
 import { BatteryReading } from './battery-reading';
 import { BatterySetting } from './battery-setting';
@@ -10,9 +12,13 @@ import { ChecklistMark } from './checklist-mark';
 import { ChecklistRun } from './checklist-run';
 import { ChecklistTemplate } from './checklist-template';
 import { ChecklistTemplateVersion } from './checklist-template-version';
+import { CapturedMail } from './captured-mail';
 import { Event } from './event';
 import { FieldMark } from './field-mark';
+import { Incident } from './incident';
+import { IncidentPhoto } from './incident-photo';
 import { Match } from './match';
+import { OutboxMail } from './outbox-mail';
 import { Repair } from './repair';
 import { RepairChange } from './repair-change';
 import { RepairPhoto } from './repair-photo';
@@ -27,6 +33,7 @@ export { Event, FieldMark, Match, Membership, ScreenToken, SessionRecord, Team, 
 export { ChecklistItemState, ChecklistMark, ChecklistRun, ChecklistTemplate, ChecklistTemplateVersion };
 export { Battery, BatteryReading, BatterySetting, BatteryUse, Charger, ChargingSession };
 export { Repair, RepairChange, RepairPhoto, RepairSetting };
+export { AccountLink, AlertRule, CapturedMail, Incident, IncidentPhoto, OutboxMail };
 export { decodeMarkValue, encodeMarkValue, hashScreenToken, newScreenToken };
 
 let boundTo: Sequelize | undefined;
@@ -40,7 +47,8 @@ export function initModels(sequelize: Sequelize) {
   const checklistModels = [ChecklistTemplate, ChecklistTemplateVersion, ChecklistRun, ChecklistItemState, ChecklistMark];
   const batteryModels = [Battery, BatteryReading, BatteryUse, Charger, ChargingSession, BatterySetting];
   const repairModels = [Repair, RepairPhoto, RepairChange, RepairSetting];
-  for (const model of [...models, ...checklistModels, ...batteryModels, ...repairModels]) model.initModel(sequelize);
+  const safetyAndMailModels = [Incident, IncidentPhoto, AlertRule, OutboxMail, CapturedMail, AccountLink];
+  for (const model of [...models, ...checklistModels, ...batteryModels, ...repairModels, ...safetyAndMailModels]) model.initModel(sequelize);
   Membership.belongsTo(Team, { foreignKey: 'teamId', as: 'team' });
   Membership.belongsTo(User, { foreignKey: 'userId', as: 'user' });
   Team.hasMany(Membership, { foreignKey: 'teamId', as: 'memberships' });
@@ -65,4 +73,7 @@ export function initModels(sequelize: Sequelize) {
   Repair.belongsTo(Event, { foreignKey: 'eventId', as: 'event' });
   RepairPhoto.belongsTo(Repair, { foreignKey: 'repairId', as: 'repair' });
   RepairChange.belongsTo(Repair, { foreignKey: 'repairId', as: 'repair' });
+  Incident.belongsTo(User, { foreignKey: 'reporterId', as: 'reporter' });
+  Incident.belongsTo(Battery, { foreignKey: 'batteryId', as: 'battery' });
+  IncidentPhoto.belongsTo(Incident, { foreignKey: 'incidentId', as: 'incident' });
 }

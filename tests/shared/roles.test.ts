@@ -39,6 +39,8 @@ describe('can(roles, capability)', () => {
     const readers = ROLES.filter((role) => can([role], 'incidents:read'));
     expect(readers).toEqual(['admin', 'safety']);
     expect(can(['lead', 'crew', 'battery', 'viewer'], 'incidents:read')).toBe(false);
+    expect(ROLES.filter((role) => can([role], 'incidents:manage'))).toEqual(['admin', 'safety']);
+    expect(ROLES.filter((role) => can([role], 'alerts:manage'))).toEqual(['admin', 'safety']);
   });
 
   it('lets a viewer read and report an incident, and write nothing else', () => {
