@@ -11,6 +11,7 @@ import { ensureDebianPackage } from './lib/system-packages.mjs';
 import { ensureDependencies } from './lib/dependencies.mjs';
 import { fail, step } from './lib/log.mjs';
 import { run, serviceGroup, startService } from './lib/processes.mjs';
+import { ensureSmtpPortFree, startSmtpFakeService } from './lib/smtp-fake.mjs';
 
 const services = serviceGroup();
 
@@ -21,6 +22,11 @@ async function main() {
   const dataDir = path.resolve(process.env.TEST_DATA_DIR ?? './data/test');
   // Uploads (ticket photos) go to the test folder, never the app's own; each run starts without any.
   const env = { ...process.env, NODE_ENV: 'test', SESSION_SECRET: 'test-only-session-secret-0123456789', CHROMIUM_PATH: '/usr/bin/chromium', DATA_DIR: dataDir };
+  // Tests never send real mail: every message goes to the SMTP fake, where tests read it.
+  delete env.SMTP_URL;
+  const smtpPort = Number(process.env.TEST_SMTP_PORT ?? 2526);
+  await ensureSmtpPortFree(smtpPort, 'TEST_SMTP_PORT');
+  env.SMTP_PORT = String(smtpPort);
   fs.rmSync(path.join(dataDir, 'uploads'), { recursive: true, force: true });
   if (process.env.TEST_DATABASE_URL) {
     env.DATABASE_URL = process.env.TEST_DATABASE_URL;
@@ -33,6 +39,7 @@ async function main() {
   step('Migrating the test database…');
   await run(process.execPath, ['--import', 'tsx', 'server/db/prepare.ts', '--no-seed'], { env });
   await ensureClientBuild();
+  await startSmtpFakeService({ env, port: smtpPort, variable: 'TEST_SMTP_PORT', track: services.add });
 
   step('Running the tests…');
   const resultsFile = 'test-results/vitest.json';

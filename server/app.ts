@@ -10,8 +10,11 @@ import { createPassport } from './auth/passport';
 import { requireAuth } from './auth/require-auth';
 import { SessionStore } from './auth/session-store';
 import { apiNotFound, errorHandler } from './middleware/error-handler';
+import { createMailDispatcher } from './mail/dispatcher';
 import { initModels } from './models';
-import { photoStore } from './repairs/photo-store';
+import { photoStore } from './photos/photo-store';
+import { alertRulesRouter } from './routes/alert-rules';
+import { accountLinksRouter } from './routes/account-links';
 import { batteriesRouter } from './routes/batteries';
 import { batteryPlanRouter } from './routes/battery-plan';
 import { batterySettingsRouter } from './routes/battery-settings';
@@ -22,7 +25,12 @@ import { checklistRunsRouter, eventChecklistRunsRouter } from './routes/checklis
 import { checklistTemplatesRouter } from './routes/checklist-templates';
 import { eventsRouter } from './routes/events';
 import { fieldProgressRouter } from './routes/field-progress';
+import { invitesRouter } from './routes/invites';
+import { mailboxRouter } from './routes/mailbox';
+import { mailFailuresRouter } from './routes/mail-failures';
 import { healthRouter } from './routes/health';
+import { incidentPhotosRouter } from './routes/incident-photos';
+import { incidentsCsvRouter, incidentsRouter } from './routes/incidents';
 import { eventMatchesRouter, matchesRouter } from './routes/matches';
 import { repairPhotosRouter } from './routes/repair-photos';
 import { repairSubsystemsRouter } from './routes/repair-subsystems';
@@ -37,6 +45,9 @@ export const SESSION_COOKIE = 'pitwright.sid';
 /** The Express app without a listening socket: what the server and Supertest both use. */
 export function createApp({ config, sequelize }: { config: Config; sequelize: Sequelize }) {
   initModels(sequelize);
+  // Sends what commands queue in the outbox, after their commit; close() stops it.
+  const mail = createMailDispatcher(config.mail);
+  mail.start();
   const app = express();
   app.disable('x-powered-by');
   if (config.trustProxy) app.set('trust proxy', config.trustProxy);
@@ -72,10 +83,17 @@ export function createApp({ config, sequelize }: { config: Config; sequelize: Se
   api.use('/screen', screenBoardRouter());
   api.use(express.json({ limit: '1mb' }), sessionMiddleware, passport.initialize(), passport.session());
   api.use(csrf.csrfSynchronisedProtection);
-  api.use('/session', sessionRouter({ passport, csrf, cookieName: SESSION_COOKIE }));
+  const features = { mailbox: config.mail.usesFake };
+  api.use('/session', sessionRouter({ passport, csrf, cookieName: SESSION_COOKIE, features, publicUrl: config.publicUrl }));
+  // Opened from an e-mail, signed out: the link's token is the credential.
+  api.use('/account-links', accountLinksRouter({ csrf, features }));
+  api.use('/mailbox', requireAuth, mailboxRouter({ usesFake: config.mail.usesFake }));
   api.use('/team/screens', requireAuth, screensRouter());
   api.use('/team/battery-settings', requireAuth, batterySettingsRouter());
   api.use('/team/repair-subsystems', requireAuth, repairSubsystemsRouter());
+  api.use('/team/mail-failures', requireAuth, mailFailuresRouter());
+  api.use('/team/invites', requireAuth, invitesRouter({ publicUrl: config.publicUrl }));
+  api.use('/team/alert-rules', requireAuth, alertRulesRouter());
   api.use('/team', requireAuth, teamRouter());
   // The event's areas before the events router, so that requireAuth runs once per request.
   api.use('/events/:eventId/matches', requireAuth, eventMatchesRouter());
@@ -96,14 +114,21 @@ export function createApp({ config, sequelize }: { config: Config; sequelize: Se
   api.use('/chargers', requireAuth, chargersRouter());
   api.use('/charging-sessions', requireAuth, chargingSessionsRouter());
   // A ticket's photos before the repairs router, as for the event's areas above.
-  api.use('/repairs/:id/photos', requireAuth, repairPhotosRouter(photoStore(config.uploadsDir)));
+  api.use('/repairs/:id/photos', requireAuth, repairPhotosRouter(photoStore(config.uploadsDir, 'repairs')));
   api.use('/repairs', requireAuth, repairsRouter());
+  api.use('/incidents.csv', requireAuth, incidentsCsvRouter());
+  api.use('/incidents/:id/photos', requireAuth, incidentPhotosRouter(photoStore(config.uploadsDir, 'incidents')));
+  api.use('/incidents', requireAuth, incidentsRouter({ publicUrl: config.publicUrl }));
   api.use(apiNotFound);
   app.use('/api', api);
 
   serveClient(app, config.clientDir);
   app.use(errorHandler);
-  return { app, sessionMiddleware, passport, close: () => store.close() };
+  const close = () => {
+    mail.stop();
+    store.close();
+  };
+  return { app, sessionMiddleware, passport, close };
 }
 
 function serveClient(app: express.Express, clientDir: string) {

@@ -38,3 +38,31 @@ export function passwordChangeLimiter() {
     handler: tooMany('wrong passwords'),
   });
 }
+
+export const RESET_REQUESTS_PER_ADDRESS = 20;
+
+/**
+ * Password-reset requests per client address, every request counted: each one may send an
+ * e-mail. (Per e-mail address the request command itself stops sending after a few an hour.)
+ */
+export function passwordResetLimiter() {
+  return rateLimit({
+    windowMs: 60 * 60_000,
+    limit: RESET_REQUESTS_PER_ADDRESS,
+    standardHeaders: 'draft-7',
+    legacyHeaders: false,
+    handler: tooMany('password reset requests'),
+  });
+}
+
+/**
+ * Failed uses of one-time links: unknown tokens per client address, wrong passwords per link
+ * (an invite to an existing account is accepted with that account's password).
+ */
+export function accountLinkLimiters() {
+  const common = { ...failuresOnly, handler: tooMany('failed attempts') };
+  return [
+    rateLimit({ ...common, limit: MAX_FAILURES_PER_ADDRESS }),
+    rateLimit({ ...common, limit: MAX_FAILURES_PER_EMAIL, keyGenerator: (req) => `link:${String(req.body?.token ?? '')}` }),
+  ];
+}

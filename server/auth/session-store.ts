@@ -42,9 +42,14 @@ export class SessionStore extends SequelizeStore {
  * (deactivation), and closes their live sockets.
  */
 export async function endSessionsOf(userId: string, { except, teamId }: { except?: string; teamId?: string } = {}) {
-  const where = { userId, ...(except ? { sid: { [Op.ne]: except } } : {}) };
-  const rows = await SessionRecord.findAll({ where, attributes: ['sid', 'data'] });
-  const sids = rows.filter((row) => !teamId || JSON.parse(row.data).activeTeamId === teamId).map((row) => row.sid);
+  const sids = await sessionsOf(userId, { except, teamId });
   if (sids.length) await SessionRecord.destroy({ where: { sid: sids } });
   disconnectSessions(sids);
+}
+
+/** The ids of one user's sessions, or of those working in one team. */
+export async function sessionsOf(userId: string, { except, teamId }: { except?: string; teamId?: string } = {}) {
+  const where = { userId, ...(except ? { sid: { [Op.ne]: except } } : {}) };
+  const rows = await SessionRecord.findAll({ where, attributes: ['sid', 'data'] });
+  return rows.filter((row) => !teamId || JSON.parse(row.data).activeTeamId === teamId).map((row) => row.sid);
 }

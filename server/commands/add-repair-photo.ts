@@ -1,12 +1,12 @@
-import { randomUUID } from 'node:crypto';
 import type { Transaction } from 'sequelize';
 import { REPAIR_PHOTOS_MAX } from '../../shared/schemas/repairs';
 import { inTransaction } from '../db/transaction';
 import { HttpError } from '../errors';
 import { Repair, RepairChange, RepairPhoto, Team } from '../models';
 import { presentOnePhoto } from '../presenters/repair';
-import type { ProcessedPhoto } from '../repairs/photo-processing';
-import type { PhotoStore } from '../repairs/photo-store';
+import { keepPhoto } from '../photos/keep-photo';
+import type { ProcessedPhoto } from '../photos/photo-processing';
+import type { PhotoStore } from '../photos/photo-store';
 import { announceChanged } from './repair-announce';
 
 const tooManyPhotos = () => new HttpError(409, 'too_many_photos', `A ticket keeps at most ${REPAIR_PHOTOS_MAX} photos: remove one first`);
@@ -22,10 +22,8 @@ export async function assertRoomForPhoto(repairId: string, transaction?: Transac
  * not change the ticket's version: it never conflicts with an edit of its fields.
  */
 export async function addRepairPhoto(teamId: string, userId: string, repairId: string, photo: ProcessedPhoto, store: PhotoStore) {
-  const photoId = randomUUID();
-  await store.write(photoId, photo.original, photo.thumb);
-  try {
-    return await inTransaction(async (transaction) => {
+  return keepPhoto(store, photo, (photoId) =>
+    inTransaction(async (transaction) => {
       await Team.lockRow(teamId, transaction);
       const repair = await Repair.ofTeam(teamId, repairId, { transaction });
       // Under the lock: two uploads of the 6th photo at once cannot both pass.
@@ -48,9 +46,6 @@ export async function addRepairPhoto(teamId: string, userId: string, repairId: s
       await RepairChange.create({ repairId: repair.id, kind: 'photo_added', changes: { photo: [null, photoId] }, byId: userId, at: now }, { transaction });
       transaction.afterCommit(() => announceChanged(repair));
       return presentOnePhoto(row, transaction);
-    });
-  } catch (error) {
-    await store.remove(photoId);
-    throw error;
-  }
+    }),
+  );
 }

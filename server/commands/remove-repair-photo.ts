@@ -1,7 +1,7 @@
 import { inTransaction } from '../db/transaction';
 import { forbidden, notFound } from '../errors';
 import { Repair, RepairChange, RepairPhoto, Team } from '../models';
-import type { PhotoStore } from '../repairs/photo-store';
+import type { PhotoStore } from '../photos/photo-store';
 import { announceChanged } from './repair-announce';
 
 /**

@@ -4,8 +4,8 @@ import { inTransaction } from '../db/transaction';
 import { stale } from '../errors';
 import { Battery, Team } from '../models';
 import { presentBattery } from '../presenters/battery';
-import { emitToEvent, emitToTeam } from '../realtime/broadcast';
-import { closeOpenCharging, closeOpenUse } from './battery-closing';
+import { emitToTeam } from '../realtime/broadcast';
+import { endOpenRecords } from './battery-closing';
 import { assertLabelFree } from './battery-guards';
 import { invalidField } from './input-guards';
 
@@ -28,10 +28,7 @@ export async function updateBattery(teamId: string, userId: string, id: string, 
       if (SET_BY_RECORDS.includes(status)) {
         throw invalidField('status', status === 'in_robot' ? 'Install it for a match to put it in the robot' : 'Put it on a charger bay to charge it');
       }
-      const now = new Date();
-      await closeOpenCharging(battery.id, userId, now, transaction);
-      const use = await closeOpenUse(battery.id, userId, now, transaction);
-      if (use) transaction.afterCommit(() => emitToEvent(use.eventId, 'batteries:used', { eventId: use.eventId, batteryId: battery.id, matchId: use.matchId }));
+      await endOpenRecords(battery.id, userId, new Date(), transaction);
       battery.status = status;
     }
     if (battery.changed()) {

@@ -1,11 +1,12 @@
 import type { UpdateMemberInput } from '../../shared/schemas/team';
 import { hashPassword, temporaryPassword } from '../auth/passwords';
-import { endSessionsOf } from '../auth/session-store';
+import { endSessionsOf, sessionsOf } from '../auth/session-store';
 import { inTransaction } from '../db/transaction';
 import type { Transaction } from 'sequelize';
 import { HttpError, notFound, stale } from '../errors';
 import { Membership, Team, User } from '../models';
 import { presentMember } from '../presenters/team';
+import { followRoles } from '../realtime/broadcast';
 
 /**
  * Changes a member's name, roles or active state, or gives them a new temporary password.
@@ -52,6 +53,8 @@ export async function updateMember(teamId: string, membershipId: string, input: 
   if (input.resetPassword) await endSessionsOf(result.membership.userId);
   // Only the sessions working in this team end: the account may be active in another team.
   else if (input.active === false) await endSessionsOf(result.membership.userId, { teamId });
+  // Live sockets follow the new roles into or out of role-only rooms (the safety log's).
+  else if (input.roles) followRoles(await sessionsOf(result.membership.userId, { teamId }), teamId, result.membership.roles);
   return result;
 }
 

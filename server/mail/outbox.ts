@@ -1,4 +1,4 @@
-import type { Transaction } from 'sequelize';
+import { Op, type Transaction } from 'sequelize';
 import type { MailKind } from '../../shared/schemas/mail';
 import { OutboxMail } from '../models';
 
@@ -20,9 +20,15 @@ export const CLAIM_MS = 5 * 60_000;
 type QueuedListener = (ids: string[]) => void;
 let onQueued: QueuedListener | undefined;
 
-/** The mail sender of this process registers here; before that (scripts) queued mail waits for a sweep. */
-export function listenForQueuedMail(listener: QueuedListener | undefined) {
+/**
+ * The mail sender of this process registers here; before that (scripts) queued mail waits for a
+ * sweep. Returns the way to leave, which leaves alone a sender registered since.
+ */
+export function listenForQueuedMail(listener: QueuedListener) {
   onQueued = listener;
+  return () => {
+    if (onQueued === listener) onQueued = undefined;
+  };
 }
 
 /**
@@ -48,4 +54,40 @@ export async function enqueueMail(transaction: Transaction, mails: readonly Mail
   );
   const ids = rows.map((row) => row.id);
   transaction.afterCommit(() => onQueued?.(ids));
+}
+
+/**
+ * Puts a message that failed back in the queue with a fresh set of attempts, claimed by this
+ * process and handed to its sender at once. False when there is no such failed message.
+ */
+export async function retryFailedMail(id: string, where: { teamId: string; kind: readonly MailKind[] }) {
+  const now = Date.now();
+  const [changed] = await OutboxMail.update(
+    { status: 'pending', attempts: 0, lastError: null, failedAt: null, nextAttemptAt: new Date(now), claimedUntil: new Date(now + CLAIM_MS) },
+    { where: { id, status: 'failed', teamId: where.teamId, kind: { [Op.in]: where.kind } } },
+  );
+  if (changed === 0) return false;
+  onQueued?.([id]);
+  return true;
+}
+
+const claimRanOut = () => ({ [Op.or]: [{ claimedUntil: null }, { claimedUntil: { [Op.lt]: new Date() } }] });
+
+/**
+ * Claims messages that are due and held by nobody (their process stopped mid-way). Each claim is
+ * a conditional update, so when two processes sweep at once, one of them wins each message.
+ */
+export async function claimDueMail(limit: number) {
+  const due = await OutboxMail.findAll({
+    attributes: ['id'],
+    where: { status: 'pending', nextAttemptAt: { [Op.lte]: new Date() }, ...claimRanOut() },
+    order: [['nextAttemptAt', 'ASC']],
+    limit,
+  });
+  const claimed: string[] = [];
+  for (const { id } of due) {
+    const [won] = await OutboxMail.update({ claimedUntil: new Date(Date.now() + CLAIM_MS) }, { where: { id, status: 'pending', ...claimRanOut() } });
+    if (won === 1) claimed.push(id);
+  }
+  return claimed;
 }

@@ -1,7 +1,7 @@
-import type { MembershipJson, SessionJson } from '../../shared/schemas/session';
+import type { FeaturesJson, MembershipJson, SessionJson } from '../../shared/schemas/session';
 import type { AuthContext } from '../auth/types';
 
-export function presentSession({ user, membership, memberships }: AuthContext, csrfToken: string): SessionJson {
+export function presentSession({ user, membership, memberships }: AuthContext, csrfToken: string, features: FeaturesJson): SessionJson {
   return {
     user: { id: user.id, name: user.name, email: user.email },
     memberships: memberships.map(
@@ -15,5 +15,6 @@ export function presentSession({ user, membership, memberships }: AuthContext, c
       }),
     ),
     csrfToken,
+    features,
   };
 }

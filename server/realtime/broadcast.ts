@@ -1,4 +1,5 @@
 import type { Server } from 'socket.io';
+import { can, type Role } from '../../shared/roles';
 
 let io: Server | undefined;
 
@@ -12,6 +13,8 @@ export const teamRoom = (teamId: string) => `team:${teamId}`;
 export const screenRoom = (screenId: string) => `screen:${screenId}`;
 // A team's pit screens, apart from its tablets' team room: team-wide news reaches a screen only when asked.
 export const teamScreensRoom = (teamId: string) => `screens:${teamId}`;
+// The team's members who read the safety log: incident news never reaches the team room, the event room or a screen.
+export const incidentsRoom = (teamId: string) => `incidents:${teamId}`;
 
 /**
  * Tells every tablet on an event that something changed (`area:verb`, e.g. `field:progressed`).
@@ -28,6 +31,11 @@ export function emitToEvent(eventId: string, name: string, payload: object) {
  */
 export function emitToTeam(teamId: string, name: string, payload: object, { withScreens = false } = {}) {
   io?.to(withScreens ? [teamRoom(teamId), teamScreensRoom(teamId)] : teamRoom(teamId)).emit(name, payload);
+}
+
+/** Tells the tablets of the team's safety captains and mentors (incidents:read) that an incident changed: ids only. */
+export function emitToIncidents(teamId: string, name: string, payload: object) {
+  io?.to(incidentsRoom(teamId)).emit(name, payload);
 }
 
 /** The team's current event changed: its connected sockets follow it to the new event's room. */
@@ -48,4 +56,15 @@ export const sessionRoom = (sid: string) => `session:${sid}`;
 /** Closes the sockets of ended sessions: they must hear nothing more of the team. */
 export function disconnectSessions(sids: readonly string[]) {
   for (const sid of sids) io?.in(sessionRoom(sid)).disconnectSockets(true);
+}
+
+/**
+ * A member's roles in a team changed: the live sockets of their sessions working there join or
+ * leave the rooms those roles decide (the incidents room), without waiting for a reconnect.
+ */
+export function followRoles(sids: readonly string[], teamId: string, roles: readonly Role[]) {
+  if (!io || sids.length === 0) return;
+  const sockets = io.in(sids.map(sessionRoom));
+  if (can(roles, 'incidents:read')) sockets.socketsJoin(incidentsRoom(teamId));
+  else sockets.socketsLeave(incidentsRoom(teamId));
 }

@@ -1,9 +1,10 @@
 import type { Server as HttpServer, IncomingMessage, ServerResponse } from 'node:http';
 import type { Request } from 'express';
 import { Server, type Socket } from 'socket.io';
+import { can } from '../../shared/roles';
 import type { createApp } from '../app';
 import { ScreenToken, Team } from '../models';
-import { attachBroadcaster, eventRoom, screenRoom, sessionRoom, teamRoom, teamScreensRoom } from './broadcast';
+import { attachBroadcaster, eventRoom, incidentsRoom, screenRoom, sessionRoom, teamRoom, teamScreensRoom } from './broadcast';
 
 type Middleware = (req: IncomingMessage, res: ServerResponse, next: (error?: unknown) => void) => void;
 
@@ -34,8 +35,9 @@ async function joinAsScreen(socket: Socket, token: string) {
 
 /**
  * Socket.IO on the app's HTTP server, signed in by the same session cookie: no session, no
- * socket. Each socket joins its team's room and the room of the team's current event. A pit
- * screen signs in with its token instead (see joinAsScreen).
+ * socket. Each socket joins its team's room and the room of the team's current event, and for
+ * safety captains and mentors the team's incidents room. A pit screen signs in with its token
+ * instead (see joinAsScreen).
  */
 export function attachRealtime(httpServer: HttpServer, { sessionMiddleware, passport }: ReturnType<typeof createApp>) {
   const io = new Server(httpServer, { serveClient: false });
@@ -67,6 +69,8 @@ export function attachRealtime(httpServer: HttpServer, { sessionMiddleware, pass
     // Its session's room: a sign-out, a team switch or a deactivation closes this socket too.
     void socket.join([teamRoom(membership.teamId), sessionRoom(req.sessionID)]);
     if (membership.team?.currentEventId) void socket.join(eventRoom(membership.team.currentEventId));
+    // A later change of roles moves the socket (followRoles).
+    if (can(membership.roles, 'incidents:read')) void socket.join(incidentsRoom(membership.teamId));
     next();
   });
   attachBroadcaster(io);

@@ -1,11 +1,14 @@
 import { Router, type Request, type Response } from 'express';
 import type { CsrfSync } from 'csrf-sync';
 import type { createPassport } from '../auth/passport';
-import { changePasswordSchema, signInSchema, switchTeamSchema } from '../../shared/schemas/session';
+import { passwordResetRequestSchema, RESET_VALID_MINUTES } from '../../shared/schemas/mail';
+import { changePasswordSchema, signInSchema, switchTeamSchema, type FeaturesJson } from '../../shared/schemas/session';
 import { hashPassword, verifyPassword } from '../auth/passwords';
+import { logIn } from '../auth/log-in';
 import { authOf, requireAuth } from '../auth/require-auth';
 import { endSessionsOf } from '../auth/session-store';
-import { passwordChangeLimiter, signInLimiters } from '../auth/failure-limits';
+import { passwordChangeLimiter, passwordResetLimiter, signInLimiters } from '../auth/failure-limits';
+import { requestPasswordReset } from '../commands/request-password-reset';
 import { HttpError, notFound } from '../errors';
 import type { User } from '../models';
 import { presentSession } from '../presenters/session';
@@ -23,10 +26,21 @@ function authenticate(passport: Passport, req: Request, res: Response) {
   });
 }
 
-const logIn = (req: Request, user: User) =>
-  new Promise<void>((resolve, reject) => req.logIn(user, (error) => (error ? reject(error) : resolve())));
+const RESET_REQUESTED = `If this address belongs to a Pitwright account, an e-mail with a link to choose a new password is on its way. The link works for ${RESET_VALID_MINUTES} minutes.`;
 
-export function sessionRouter({ passport, csrf, cookieName }: { passport: Passport; csrf: CsrfSync; cookieName: string }) {
+export function sessionRouter({
+  passport,
+  csrf,
+  cookieName,
+  features,
+  publicUrl,
+}: {
+  passport: Passport;
+  csrf: CsrfSync;
+  cookieName: string;
+  features: FeaturesJson;
+  publicUrl: string;
+}) {
   const router = Router();
 
   router.post('/', ...signInLimiters(), async (req, res) => {
@@ -40,11 +54,11 @@ export function sessionRouter({ passport, csrf, cookieName }: { passport: Passpo
     await logIn(req, user); // passport regenerates the session id here
     req.session.activeTeamId = memberships[0].teamId;
     const auth = { user, membership: memberships[0], memberships };
-    res.json(presentSession(auth, csrf.generateToken(req, true)));
+    res.json(presentSession(auth, csrf.generateToken(req, true), features));
   });
 
   router.get('/', requireAuth, (req, res) => {
-    res.json(presentSession(authOf(req), csrf.generateToken(req)));
+    res.json(presentSession(authOf(req), csrf.generateToken(req), features));
   });
 
   router.patch('/', requireAuth, (req, res) => {
@@ -55,7 +69,7 @@ export function sessionRouter({ passport, csrf, cookieName }: { passport: Passpo
     req.session.activeTeamId = teamId;
     // Its sockets sit in the old team's rooms; the client opens a new one for the new team.
     disconnectSessions([req.sessionID]);
-    res.json(presentSession({ ...auth, membership }, csrf.generateToken(req)));
+    res.json(presentSession({ ...auth, membership }, csrf.generateToken(req), features));
   });
 
   router.delete('/', (req, res, next) => {
@@ -67,6 +81,13 @@ export function sessionRouter({ passport, csrf, cookieName }: { passport: Passpo
         res.clearCookie(cookieName).status(204).end();
       });
     });
+  });
+
+  // The same answer whether or not the address has an account: nobody learns who does.
+  router.post('/password-reset', passwordResetLimiter(), async (req, res) => {
+    const { email } = passwordResetRequestSchema.parse(req.body);
+    await requestPasswordReset(email, publicUrl);
+    res.status(202).json({ message: RESET_REQUESTED });
   });
 
   router.put('/password', requireAuth, passwordChangeLimiter(), async (req, res) => {

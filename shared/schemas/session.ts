@@ -57,8 +57,15 @@ export interface MembershipJson {
   active: boolean;
 }
 
+/** What this server offers, whoever asks: the client shows a page only when both it and the role allow. */
+export interface FeaturesJson {
+  /** Mail goes to the local SMTP fake, whose messages the Mailbox page shows. */
+  mailbox: boolean;
+}
+
 export interface SessionJson {
   user: UserJson;
   memberships: MembershipJson[];
   csrfToken: string;
+  features: FeaturesJson;
 }

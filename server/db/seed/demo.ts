@@ -6,6 +6,7 @@ import { hashPassword } from '../../auth/passwords';
 import { Event, FieldMark, Match, Membership, Team, User } from '../../models';
 import { seedDemoBatteries } from './demo-batteries';
 import { seedDemoChecklists, type DemoChecklistMatch } from './demo-checklists';
+import { seedDemoIncidents } from './demo-incidents';
 import { seedDemoRepairs } from './demo-repairs';
 import { demoSchedule } from './demo-schedule';
 import { inTransaction } from '../transaction';
@@ -29,7 +30,8 @@ export const demoEmail = (role: Role) => `${role}@${DEMO_DOMAIN}`;
 
 /**
  * Seeds the invented demo team with one account per role, its event's qualification schedule
- * (the field partway through day one), its checklists, its battery fleet and its repair board.
+ * (the field partway through day one), its checklists, its battery fleet, its repair board and
+ * its safety log.
  * Refuses in production, where well-known passwords must never exist.
  */
 export async function seedDemo({ env, now = new Date() }: { env: string; now?: Date }) {
@@ -59,6 +61,7 @@ export async function seedDemo({ env, now = new Date() }: { env: string; now?: D
     await seedDemoChecklists({ team, event, users, matches, now }, transaction);
     await seedDemoBatteries({ team, event, users, matches, now }, transaction);
     await seedDemoRepairs({ event, users, matches, now }, transaction);
+    await seedDemoIncidents({ team, event, users, now }, transaction);
   });
 }
 

@@ -6,12 +6,15 @@ export type PhotoSize = 'full' | 'thumb';
 // Names are ours alone: a UUID, never anything from the upload.
 const PHOTO_ID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
 
+/** The areas that keep photos, each in a folder of its own. */
+export type PhotoArea = 'repairs' | 'incidents';
+
 /**
- * Where ticket photos live: `<uploadsDir>/repairs/<photoId>` and its `<photoId>.thumb.webp`,
+ * Where an area's photos live: `<uploadsDir>/<area>/<photoId>` and its `<photoId>.thumb.webp`,
  * outside the folder the client is served from, so they are read only through their route.
  */
-export function photoStore(uploadsDir: string) {
-  const dir = path.join(uploadsDir, 'repairs');
+export function photoStore(uploadsDir: string, area: PhotoArea) {
+  const dir = path.join(uploadsDir, area);
   const fileOf = (photoId: string, size: PhotoSize) => {
     if (!PHOTO_ID.test(photoId)) throw new Error(`Not a photo id: ${photoId}`);
     return path.join(dir, size === 'thumb' ? `${photoId}.thumb.webp` : photoId);

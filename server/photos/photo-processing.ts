@@ -3,7 +3,7 @@ import sharp from 'sharp';
 import { REPAIR_PHOTO_TYPES, type RepairPhotoType } from '../../shared/schemas/repairs';
 import { HttpError } from '../errors';
 
-/** The board's card thumbnail fits inside this square. */
+/** A thumbnail (a ticket's card, a report's photo strip) fits inside this square. */
 export const THUMB_SIZE = 320;
 // A phone photo is 12–50 megapixels; a 10 MB file claiming far more is a decompression bomb.
 export const PHOTO_MAX_PIXELS = 100_000_000;

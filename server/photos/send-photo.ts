@@ -1,0 +1,38 @@
+import { pipeline } from 'node:stream/promises';
+import type { Response } from 'express';
+import { HttpError, notFound } from '../errors';
+import type { PhotoSize, PhotoStore } from './photo-store';
+
+/** What serving a photo needs of its row, in any area. */
+export interface StoredPhoto {
+  id: string;
+  contentType: string;
+  hasThumb: boolean;
+}
+
+/**
+ * Streams a photo (or its thumbnail) the caller may see: the type read from its content when it
+ * was stored, inline, cached privately for good (a photo id never changes content).
+ */
+export async function sendPhoto(res: Response, store: PhotoStore, photo: StoredPhoto, size: PhotoSize) {
+  if (size === 'thumb' && !photo.hasThumb) throw new HttpError(404, 'no_thumbnail', 'This photo has no thumbnail: open the photo itself');
+  const file = await store.open(photo.id, size);
+  if (!file) throw notFound('Photo');
+  let length: number;
+  try {
+    length = (await file.stat()).size;
+  } catch (error) {
+    await file.close();
+    throw error;
+  }
+  res.set({
+    // helmet adds X-Content-Type-Options: nosniff.
+    'Content-Type': size === 'thumb' ? 'image/webp' : photo.contentType,
+    'Content-Length': String(length),
+    'Content-Disposition': 'inline',
+    // Only the team's members may keep a copy.
+    'Cache-Control': 'private, max-age=31536000, immutable',
+  });
+  // A tablet that leaves mid-download is not a server fault.
+  await pipeline(file.createReadStream(), res).catch(() => undefined);
+}
