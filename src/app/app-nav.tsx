@@ -1,6 +1,7 @@
 import { matchPath, NavLink, useLocation } from 'react-router';
 import { can } from '@shared/roles';
 import { MoreIcon } from '../components/ui/icons';
+import { useSession } from '../features/session/api/get-session';
 import { useViewer } from '../lib/authorization';
 import { NAV_ITEMS, type NavItem } from './nav-items';
 
@@ -24,7 +25,8 @@ function Item({ to, label, icon: Icon, className = '', alsoActive = false }: Pic
 /** The areas this member may open (the navigation and the More page list the same ones). */
 export function useNavItems(): NavItem[] {
   const { membership } = useViewer();
-  return NAV_ITEMS.filter((item) => can(membership.roles, item.capability));
+  const features = useSession().data?.features;
+  return NAV_ITEMS.filter((item) => can(membership.roles, item.capability) && (!item.feature || features?.[item.feature] === true));
 }
 
 /**

@@ -31,6 +31,8 @@ const STALE_AFTER: Record<string, string[][]> = {
   'repairs:created': REPAIRS,
   'repairs:changed': REPAIRS,
   'repairs:subsystems-changed': [['repair-subsystems']],
+  // Only safety and admin sockets hear it (the server's incidents room): the log and the open report.
+  'incidents:changed': [['incidents'], ['incident']],
 };
 
 /**

@@ -1,6 +1,8 @@
 import type { ComponentType, SVGProps } from 'react';
 import type { Capability } from '@shared/roles';
-import { BatteryIcon, BoardIcon, CalendarIcon, ChecksIcon, ScheduleIcon, TeamIcon, WrenchIcon } from '../components/ui/icons';
+import type { FeaturesJson } from '@shared/schemas/session';
+import { BatteryIcon, BoardIcon, CalendarIcon, ChecksIcon, MailIcon, ScheduleIcon, TeamIcon, WrenchIcon } from '../components/ui/icons';
+import { ShieldIcon } from '../components/ui/safety-icons';
 
 export interface NavItem {
   to: string;
@@ -13,6 +15,8 @@ export interface NavItem {
    * the "More" page (a 360 px bar holds six items at most, and later areas still join).
    */
   primary: boolean;
+  /** A part of the server that may be off (the mailbox exists only while the SMTP fake takes the mail). */
+  feature?: keyof FeaturesJson;
 }
 
 // Only the areas that exist today; DESIGN §3 lists the others, which join as they are built.
@@ -22,6 +26,8 @@ export const NAV_ITEMS: NavItem[] = [
   { to: '/checks', label: 'Checks', icon: ChecksIcon, capability: 'board:read', primary: true },
   { to: '/batteries', label: 'Batteries', icon: BatteryIcon, capability: 'board:read', primary: true },
   { to: '/repairs', label: 'Repairs', icon: WrenchIcon, capability: 'board:read', primary: true },
+  { to: '/safety', label: 'Safety', icon: ShieldIcon, capability: 'incidents:report', primary: false },
   { to: '/events', label: 'Events', icon: CalendarIcon, capability: 'events:read', primary: false },
   { to: '/team', label: 'Team', icon: TeamIcon, capability: 'team:read', primary: false },
+  { to: '/mailbox', label: 'Mailbox', icon: MailIcon, capability: 'mailbox:read', primary: false, feature: 'mailbox' },
 ];

@@ -3,11 +3,13 @@ import type { QueryClient } from '@tanstack/react-query';
 import type { Capability } from '@shared/roles';
 import { createBrowserRouter, redirect, type LoaderFunctionArgs } from 'react-router';
 import { Loading } from '../components/ui/loading';
+import { ForgotPasswordPage } from '../features/account/components/forgot-password-page';
 import { EditTemplatePage, NewTemplatePage } from '../features/checks/components/templates/template-editor-page';
 import { TemplatesPage } from '../features/checks/components/templates/templates-page';
 import { EditEventPage } from '../features/events/components/edit-event-page';
 import { EventsPage } from '../features/events/components/events-page';
 import { NewEventPage } from '../features/events/components/new-event-page';
+import { MailboxPage } from '../features/mailbox/components/mailbox-page';
 import { sessionQueryOptions } from '../features/session/api/get-session';
 import { SignInPage } from '../features/session/components/sign-in-page';
 import { safeNext, signInPath } from '../lib/safe-next';
@@ -15,10 +17,12 @@ import { AppShell } from './app-shell';
 import { MorePage } from './more-page';
 import { RequireCapability } from './require-capability';
 import { NotFound, RouteError } from './route-error';
+import { AccountLinkRoute } from './routes/account-route';
 import { BatteriesRoute, BatteryLabelsRoute, BatteryRoute } from './routes/batteries-route';
 import { BoardRoute } from './routes/board-route';
 import { ChecksRoute, RunRoute } from './routes/checks-route';
 import { NewRepairRoute, RepairRoute, RepairsRoute, SubsystemsRoute } from './routes/repairs-route';
+import { IncidentRoute, ReportIncidentRoute, SafetyPrintRoute, SafetyRoute } from './routes/safety-route';
 import { ScheduleRoute } from './routes/schedule-route';
 import { ScreenRoute } from './routes/screen-route';
 import { TeamRoute } from './routes/team-route';
@@ -61,6 +65,17 @@ export function createAppRouter(queryClient: QueryClient) {
       element: <SignInPage />,
       errorElement: <RouteError />,
       hydrateFallbackElement: starting,
+    },
+    {
+      // Signed out or in, as a link from an e-mail finds the person.
+      path: '/forgot-password',
+      element: <ForgotPasswordPage />,
+      errorElement: <RouteError />,
+    },
+    {
+      path: '/account-link',
+      element: <AccountLinkRoute />,
+      errorElement: <RouteError />,
     },
     {
       path: '/',
@@ -130,6 +145,23 @@ export function createAppRouter(queryClient: QueryClient) {
               element: guarded('board:read', <RepairRoute />),
             },
             {
+              path: 'safety',
+              element: guarded('incidents:report', <SafetyRoute />),
+            },
+            {
+              path: 'safety/report',
+              element: guarded('incidents:report', <ReportIncidentRoute />),
+            },
+            {
+              // Its reporter may open it too: the server decides, and the page says why when it refuses.
+              path: 'safety/incidents/:incidentId',
+              element: guarded('incidents:report', <IncidentRoute />),
+            },
+            {
+              path: 'safety/print',
+              element: guarded('incidents:read', <SafetyPrintRoute />),
+            },
+            {
               path: 'events',
               element: guarded('events:read', <EventsPage />),
             },
@@ -144,6 +176,10 @@ export function createAppRouter(queryClient: QueryClient) {
             {
               path: 'team',
               element: guarded('team:read', <TeamRoute />),
+            },
+            {
+              path: 'mailbox',
+              element: guarded('mailbox:read', <MailboxPage />),
             },
             {
               // The areas a phone's bottom bar has no room for.

@@ -48,3 +48,8 @@ export function describeZone(instant: Date, timeZone: string): string {
 export function readableZone(timeZone: string): string {
   return timeZone.replaceAll('_', ' ').replaceAll('/', ' / ');
 }
+
+/** An instant in the reader's own zone and clock habit, e.g. "Sat 12 Dec, 14:05", for mail and links. */
+export function formatDateTime(at: string): string {
+  return new Date(at).toLocaleString(undefined, { weekday: 'short', day: 'numeric', month: 'short', hour: 'numeric', minute: '2-digit' });
+}

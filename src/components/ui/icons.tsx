@@ -228,3 +228,10 @@ export const DotIcon = (p: IconProps) => (
     <circle cx="12" cy="12" r="5" />
   </Icon>
 );
+
+export const MailIcon = (p: IconProps) => (
+  <Icon {...p}>
+    <rect x="3" y="5" width="18" height="14" rx="2" />
+    <path d="m3.5 6.5 8.5 6.5 8.5-6.5" />
+  </Icon>
+);

@@ -1,13 +1,12 @@
 import { useEffect, useRef, useState, type ChangeEvent } from 'react';
-import { REPAIR_PHOTO_MAX_BYTES } from '@shared/schemas/repairs';
-import { CameraIcon, PhotoIcon } from '../../../components/ui/action-icons';
-import { Spinner } from '../../../components/ui/loading';
+import { CameraIcon, PhotoIcon } from './action-icons';
+import { Spinner } from './loading';
 
 const PREVIEW_WIDTH = 240;
 
 /** Refused before sending: the server would refuse it too, after a long upload on arena Wi-Fi. */
-export function photoProblem(file: File): string | null {
-  if (file.size > REPAIR_PHOTO_MAX_BYTES) return `This photo is ${(file.size / 1024 / 1024).toFixed(1)} MB; at most ${REPAIR_PHOTO_MAX_BYTES / 1024 / 1024} MB.`;
+export function photoProblem(file: File, maxBytes: number): string | null {
+  if (file.size > maxBytes) return `This photo is ${(file.size / 1024 / 1024).toFixed(1)} MB; at most ${maxBytes / 1024 / 1024} MB.`;
   return null;
 }
 

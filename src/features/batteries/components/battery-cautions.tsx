@@ -1,5 +1,5 @@
 import type { ReactNode } from 'react';
-import { AirIcon, DropIcon, GogglesIcon } from './battery-icons';
+import { AirIcon, DropIcon, GogglesIcon } from '../../../components/ui/safety-icons';
 
 function Caution({ icon, children }: { icon: ReactNode; children: ReactNode }) {
   return (

@@ -58,26 +58,3 @@ export const RetiredIcon = (p: IconProps) => (
     <path d="M5 9v9.5A1.5 1.5 0 0 0 6.5 20h11a1.5 1.5 0 0 0 1.5-1.5V9M10 13h4" />
   </Icon>
 );
-
-/** Safety glasses. */
-export const GogglesIcon = (p: IconProps) => (
-  <Icon {...p}>
-    <path d="M2.5 9.5h19v4a3.5 3.5 0 0 1-3.5 3.5h-1.6a2.5 2.5 0 0 1-2.2-1.4L13 14a1.1 1.1 0 0 0-2 0l-1.2 1.6A2.5 2.5 0 0 1 7.6 17H6a3.5 3.5 0 0 1-3.5-3.5z" />
-    <path d="M2.5 9.5L4 7h16l1.5 2.5" />
-  </Icon>
-);
-
-/** Rinsing water. */
-export const DropIcon = (p: IconProps) => (
-  <Icon {...p}>
-    <path d="M12 3s6 6.5 6 11a6 6 0 0 1-12 0c0-4.5 6-11 6-11z" />
-    <path d="M9.5 14.5a2.5 2.5 0 0 0 2.5 2.5" />
-  </Icon>
-);
-
-/** Moving air: ventilate while charging. */
-export const AirIcon = (p: IconProps) => (
-  <Icon {...p}>
-    <path d="M3 8h11a2.5 2.5 0 1 0-2.5-2.5M3 12h16a2.5 2.5 0 1 1-2.5 2.5M3 16h8a2.5 2.5 0 1 1-2.5 2.5" />
-  </Icon>
-);

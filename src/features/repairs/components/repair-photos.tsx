@@ -1,15 +1,15 @@
 import { useState } from 'react';
-import { REPAIR_PHOTOS_MAX, type RepairDetailJson, type RepairPhotoJson } from '@shared/schemas/repairs';
+import { REPAIR_PHOTO_MAX_BYTES, REPAIR_PHOTOS_MAX, type RepairDetailJson, type RepairPhotoJson } from '@shared/schemas/repairs';
 import { PhotoIcon, TrashIcon } from '../../../components/ui/action-icons';
 import { Button } from '../../../components/ui/button';
 import { Dialog } from '../../../components/ui/dialog';
 import { ErrorNotice } from '../../../components/ui/error-notice';
+import { PhotoPicker, photoProblem } from '../../../components/ui/photo-picker';
 import { isApiError } from '../../../lib/api-client';
 import { useCan, useViewer } from '../../../lib/authorization';
 import { useDeletePhoto } from '../api/delete-photo';
 import { useUploadPhoto } from '../api/upload-photo';
 import { formatWhen } from './repair-format';
-import { PhotoPicker, photoProblem } from './photo-picker';
 
 function PhotoTile({ photo, position, title, when, canRemove, onRemove }: {
   photo: RepairPhotoJson;
@@ -62,7 +62,7 @@ export function RepairPhotos({ ticket, timeZone, now }: { ticket: RepairDetailJs
   const uploadMessage = isApiError(upload.error) ? (upload.error.fields.photo ?? upload.error.message) : upload.error?.message;
 
   function add(file: File) {
-    const problem = photoProblem(file);
+    const problem = photoProblem(file, REPAIR_PHOTO_MAX_BYTES);
     setTooBig(problem);
     if (!problem) upload.mutate(file);
   }

@@ -1,18 +1,18 @@
 import { useState, type FormEvent } from 'react';
 import { useNavigate } from 'react-router';
-import { REPAIR_DESCRIPTION_MAX, REPAIR_TITLE_MAX } from '@shared/schemas/repairs';
+import { REPAIR_DESCRIPTION_MAX, REPAIR_PHOTO_MAX_BYTES, REPAIR_TITLE_MAX } from '@shared/schemas/repairs';
 import { Button, LinkButton } from '../../../components/ui/button';
 import { ErrorNotice } from '../../../components/ui/error-notice';
 import { controlClass, Field, TextField } from '../../../components/ui/field';
 import { Loading } from '../../../components/ui/loading';
 import { PageHeader } from '../../../components/ui/page-header';
+import { PhotoPicker, PickedPhoto, photoProblem } from '../../../components/ui/photo-picker';
 import { isApiError } from '../../../lib/api-client';
 import type { FieldErrors } from '../../../lib/form-errors';
 import { newId } from '../../../lib/new-id';
 import { useCreateRepair } from '../api/create-repair';
 import { useSubsystems } from '../api/get-subsystems';
 import { useUploadPhoto } from '../api/upload-photo';
-import { PhotoPicker, PickedPhoto, photoProblem } from './photo-picker';
 import type { RepairAssignee, RepairMatch } from './repair-context';
 import { AssigneeSelect, FoundInSelect, MinutesField, SeverityChoices, SubsystemChoices } from './repair-fields';
 import { emptyReport, fieldErrorsOf, readReport, type ReportValues } from './repair-form-values';
@@ -60,14 +60,14 @@ export function ReportRepairPage({ eventId, matches, defaultMatchId, assignees }
   }
 
   function pick(file: File) {
-    const problem = photoProblem(file);
+    const problem = photoProblem(file, REPAIR_PHOTO_MAX_BYTES);
     setPhotoError(problem);
     setPhoto(problem ? null : file);
   }
 
   function retakePhoto(file: File) {
     pick(file);
-    if (!photoProblem(file)) sendPhoto(file);
+    if (!photoProblem(file, REPAIR_PHOTO_MAX_BYTES)) sendPhoto(file);
   }
 
   const uploadMessage = upload.error ? (isApiError(upload.error) ? (upload.error.fields.photo ?? upload.error.message) : upload.error.message) : null;

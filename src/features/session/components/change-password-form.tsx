@@ -6,7 +6,7 @@ import { ErrorNotice } from '../../../components/ui/error-notice';
 import { CheckIcon } from '../../../components/ui/icons';
 import { mergeFieldErrors, parseForm, type FieldErrors } from '../../../lib/form-errors';
 import { useChangePassword } from '../api/change-password';
-import { PasswordInput } from './password-input';
+import { PasswordInput } from '../../../components/ui/password-input';
 
 export function ChangePasswordForm() {
   const changePassword = useChangePassword();

@@ -1,15 +1,15 @@
 import { useState, type FormEvent } from 'react';
 import { useNavigate, useSearchParams } from 'react-router';
 import { signInSchema } from '@shared/schemas/session';
-import { Button } from '../../../components/ui/button';
+import { Button, LinkButton } from '../../../components/ui/button';
 import { ErrorNotice } from '../../../components/ui/error-notice';
 import { TextField } from '../../../components/ui/field';
-import { Wordmark } from '../../../components/ui/wordmark';
+import { SignedOutPage, signedOutPanelClass } from '../../../components/ui/signed-out-page';
 import { isApiError } from '../../../lib/api-client';
 import { mergeFieldErrors, parseForm, type FieldErrors } from '../../../lib/form-errors';
 import { safeNext } from '../../../lib/safe-next';
 import { useSignIn } from '../api/sign-in';
-import { PasswordInput } from './password-input';
+import { PasswordInput } from '../../../components/ui/password-input';
 
 function explain(error: unknown): unknown {
   if (isApiError(error, 'rate_limited') && error.retryAfterSeconds) {
@@ -39,17 +39,8 @@ export function SignInPage() {
   }
 
   return (
-    <main className="flex min-h-dvh flex-col items-center justify-center gap-8 px-4 py-10">
-      <div className="text-center">
-        <Wordmark size="lg" />
-        <p className="mt-3 text-lg text-ink-muted">One calm board for a loud pit.</p>
-      </div>
-      <form
-        noValidate
-        onSubmit={submit}
-        aria-labelledby="sign-in-title"
-        className="flex w-full max-w-md flex-col gap-5 rounded-2xl border border-line bg-surface p-6 shadow-sm sm:p-8"
-      >
+    <SignedOutPage>
+      <form noValidate onSubmit={submit} aria-labelledby="sign-in-title" className={signedOutPanelClass}>
         <h1 id="sign-in-title" className="text-2xl font-bold">
           Sign in to your team
         </h1>
@@ -76,10 +67,13 @@ export function SignInPage() {
         <Button type="submit" size="lg" pending={signIn.isPending} className="mt-2 w-full">
           Sign in
         </Button>
+        <LinkButton to="/forgot-password" state={{ email }} variant="quiet" className="underline">
+          Forgot your password?
+        </LinkButton>
       </form>
       <p className="max-w-md text-center text-sm text-ink-muted">
-        No account yet? A mentor adds you from the team page and gives you a first password.
+        No account yet? A mentor invites you by e-mail from the team page, or gives you a first password.
       </p>
-    </main>
+    </SignedOutPage>
   );
 }

@@ -6,16 +6,18 @@ interface RoleCheckboxesProps {
   onChange: (roles: Role[]) => void;
   error?: string;
   legend?: string;
+  /** The roles offered, in the order shown; alert rules leave out viewers. */
+  roles?: readonly Role[];
 }
 
-export function RoleCheckboxes({ value, onChange, error, legend = 'Roles' }: RoleCheckboxesProps) {
+export function RoleCheckboxes({ value, onChange, error, legend = 'Roles', roles = ROLES }: RoleCheckboxesProps) {
   function toggle(role: Role, checked: boolean) {
     // Keep the table's order whatever order they were ticked in.
-    onChange(ROLES.filter((each) => (each === role ? checked : value.includes(each))));
+    onChange(roles.filter((each) => (each === role ? checked : value.includes(each))));
   }
   return (
     <CheckboxGroup legend={legend} error={error}>
-      {ROLES.map((role) => (
+      {roles.map((role) => (
         <Checkbox
           key={role}
           label={ROLE_LABELS[role]}

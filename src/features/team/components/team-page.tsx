@@ -1,16 +1,20 @@
 import { useState } from 'react';
+import type { InviteJson } from '@shared/schemas/mail';
 import type { CreatedMemberJson, MemberJson } from '@shared/schemas/team';
 import { Button } from '../../../components/ui/button';
 import { Card } from '../../../components/ui/card';
 import { ErrorNotice } from '../../../components/ui/error-notice';
-import { PlusIcon } from '../../../components/ui/icons';
+import { CheckIcon, PlusIcon } from '../../../components/ui/icons';
 import { Loading } from '../../../components/ui/loading';
 import { PageHeader } from '../../../components/ui/page-header';
 import { useCan, useViewer } from '../../../lib/authorization';
 import { useMembers } from '../api/get-members';
 import { useTeam } from '../api/get-team';
 import { AddMemberForm } from './add-member-form';
+import { AlertRulesCard } from './alert-rules-card';
+import { MailFailuresCard } from './mail-failures-card';
 import { MemberCard } from './member-card';
+import { PendingInvitesCard } from './pending-invites-card';
 import { PitScreensCard } from './pit-screens-card';
 import { TemporaryPasswordDialog } from './temporary-password-dialog';
 
@@ -26,8 +30,10 @@ export function TeamPage() {
   const { membership } = useViewer();
   const canManage = useCan('members:manage');
   const canManageScreens = useCan('screens:manage');
+  const canManageAlerts = useCan('alerts:manage');
   const [adding, setAdding] = useState(false);
   const [added, setAdded] = useState<CreatedMemberJson | null>(null);
+  const [invited, setInvited] = useState<InviteJson | null>(null);
 
   const title = team.data ? `Team ${team.data.number}` : 'Team';
   return (
@@ -38,7 +44,13 @@ export function TeamPage() {
         actions={
           canManage &&
           !adding && (
-            <Button icon={<PlusIcon />} onClick={() => setAdding(true)}>
+            <Button
+              icon={<PlusIcon />}
+              onClick={() => {
+                setInvited(null);
+                setAdding(true);
+              }}
+            >
               Add a member
             </Button>
           )
@@ -55,9 +67,15 @@ export function TeamPage() {
         </div>
       )}
 
+      {canManageAlerts && <MailFailuresCard />}
+
       {adding && (
         <Card className="mb-6">
           <AddMemberForm
+            onInvited={(invite) => {
+              setAdding(false);
+              setInvited(invite);
+            }}
             onAdded={(member) => {
               setAdding(false);
               setAdded(member);
@@ -65,6 +83,14 @@ export function TeamPage() {
             onCancel={() => setAdding(false)}
           />
         </Card>
+      )}
+      {invited && (
+        <p role="status" className="mb-6 flex items-start gap-2 rounded-xl bg-ok-soft p-4 text-lg font-semibold text-ok">
+          <CheckIcon className="mt-0.5 size-6" />
+          <span className="min-w-0 break-words">
+            Invite sent to {invited.name} ({invited.email}). They appear among the members once they have used the link.
+          </span>
+        </p>
       )}
 
       <section aria-labelledby="members-title" className="mb-8">
@@ -90,6 +116,8 @@ export function TeamPage() {
         )}
       </section>
 
+      {canManage && <PendingInvitesCard />}
+      {canManageAlerts && <AlertRulesCard />}
       {canManageScreens && <PitScreensCard />}
 
       <TemporaryPasswordDialog member={added} onClose={() => setAdded(null)} />

@@ -1,5 +1,5 @@
 import { useState } from 'react';
-import { Field, controlClass } from '../../../components/ui/field';
+import { Field, controlClass } from './field';
 
 interface PasswordInputProps {
   label: string;

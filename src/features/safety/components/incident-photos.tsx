@@ -1,0 +1,94 @@
+import { useState } from 'react';
+import { INCIDENT_PHOTO_MAX_BYTES, INCIDENT_PHOTOS_MAX, type IncidentJson, type IncidentPhotoJson } from '@shared/schemas/incidents';
+import { PhotoIcon, TrashIcon } from '../../../components/ui/action-icons';
+import { Button } from '../../../components/ui/button';
+import { Dialog } from '../../../components/ui/dialog';
+import { ErrorNotice } from '../../../components/ui/error-notice';
+import { PhotoPicker, photoProblem } from '../../../components/ui/photo-picker';
+import { isApiError } from '../../../lib/api-client';
+import { useCan } from '../../../lib/authorization';
+import { incidentPhotoUrl } from '../api/get-incident';
+import { useDeleteIncidentPhoto, useUploadIncidentPhoto } from '../api/incident-photos';
+
+function PhotoTile({ incidentId, photo, position, onRemove }: { incidentId: string; photo: IncidentPhotoJson; position: number; onRemove?: () => void }) {
+  const name = `Photo ${position} of the report`;
+  return (
+    <li className="flex flex-col gap-1.5">
+      <a href={incidentPhotoUrl(incidentId, photo.id, 'full')} target="_blank" rel="noopener" className="block overflow-hidden rounded-xl border-2 border-line bg-sunken">
+        {photo.hasThumb ? (
+          <img src={incidentPhotoUrl(incidentId, photo.id, 'thumb')} alt={name} loading="lazy" className="aspect-[4/3] w-full object-cover" />
+        ) : (
+          // A HEIC the server could not read: no preview, but the photo opens on devices that show it.
+          <span className="flex aspect-[4/3] w-full flex-col items-center justify-center gap-1 p-2 text-center">
+            <PhotoIcon className="size-9 text-ink-muted" />
+            <span className="font-semibold">Photo</span>
+            <span className="text-sm text-accent-ink underline">Open it</span>
+            <span className="sr-only">{name}</span>
+          </span>
+        )}
+      </a>
+      {onRemove && (
+        <Button variant="quiet" className="-ml-4 self-start" icon={<TrashIcon className="size-5" />} onClick={onRemove}>
+          Remove<span className="sr-only"> {name.toLowerCase()}</span>
+        </Button>
+      )}
+    </li>
+  );
+}
+
+/** The report's photos; its reporter and the safety captains add them from the camera, the captains remove them. */
+export function IncidentPhotos({ incident }: { incident: IncidentJson }) {
+  const canManage = useCan('incidents:manage');
+  const upload = useUploadIncidentPhoto(incident.id);
+  const remove = useDeleteIncidentPhoto(incident.id);
+  const [removing, setRemoving] = useState<IncidentPhotoJson | null>(null);
+  const [tooBig, setTooBig] = useState<string | null>(null);
+  const full = incident.photos.length >= INCIDENT_PHOTOS_MAX;
+  const uploadMessage = isApiError(upload.error) ? (upload.error.fields.photo ?? upload.error.message) : upload.error?.message;
+
+  function add(file: File) {
+    const problem = photoProblem(file, INCIDENT_PHOTO_MAX_BYTES);
+    setTooBig(problem);
+    if (!problem) upload.mutate(file);
+  }
+
+  return (
+    <section aria-labelledby="incident-photos-title" className="flex flex-col gap-3">
+      <div className="flex flex-wrap items-center justify-between gap-3">
+        <h2 id="incident-photos-title" className="text-2xl font-bold">
+          Photos <span className="text-lg font-semibold text-ink-muted tabular-nums">{incident.photos.length} of {INCIDENT_PHOTOS_MAX}</span>
+        </h2>
+        {!full && <PhotoPicker label="Add a photo" onPick={add} pending={upload.isPending} />}
+      </div>
+      {incident.photos.length === 0 ? (
+        <p className="text-ink-muted">No photos.</p>
+      ) : (
+        <ul className="grid grid-cols-2 gap-3 sm:grid-cols-3">
+          {incident.photos.map((photo, index) => (
+            <PhotoTile key={photo.id} incidentId={incident.id} photo={photo} position={index + 1} onRemove={canManage ? () => setRemoving(photo) : undefined} />
+          ))}
+        </ul>
+      )}
+      {tooBig && <p className="font-semibold text-danger">{tooBig}</p>}
+      {upload.isError && <ErrorNotice title="The photo was not added" error={new Error(uploadMessage ?? 'Something went wrong.')} />}
+      {remove.isError && <ErrorNotice title="The photo was not removed" error={remove.error} />}
+      <Dialog
+        open={removing !== null}
+        title="Remove this photo?"
+        onClose={() => setRemoving(null)}
+        actions={
+          <>
+            <Button variant="secondary" onClick={() => setRemoving(null)}>
+              Keep it
+            </Button>
+            <Button variant="danger" pending={remove.isPending} onClick={() => removing && remove.mutate(removing.id, { onSettled: () => setRemoving(null) })}>
+              Remove photo
+            </Button>
+          </>
+        }
+      >
+        <p>It goes from the report for everyone.</p>
+      </Dialog>
+    </section>
+  );
+}

@@ -1,0 +1,16 @@
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { api } from '../../../lib/api-client';
+import { invitesQueryOptions } from './get-invites';
+
+/** The invite's link stops working at once; the person can be invited again later. */
+export function revokeInvite(id: string): Promise<void> {
+  return api.delete(`/api/team/invites/${encodeURIComponent(id)}`);
+}
+
+export function useRevokeInvite() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: revokeInvite,
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: invitesQueryOptions().queryKey }),
+  });
+}

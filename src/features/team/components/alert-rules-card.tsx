@@ -1,0 +1,36 @@
+import { ALERT_RULE_KEYS } from '@shared/schemas/mail';
+import { Card } from '../../../components/ui/card';
+import { ErrorNotice } from '../../../components/ui/error-notice';
+import { Loading } from '../../../components/ui/loading';
+import { useAlertRules } from '../api/get-alert-rules';
+import { AlertRuleForm } from './alert-rule-form';
+
+/** Who hears of an incident by e-mail, one rule per kind of incident. */
+export function AlertRulesCard() {
+  const rules = useAlertRules();
+  return (
+    <Card aria-labelledby="alert-rules-title" className="mb-8 flex flex-col">
+      <h2 id="alert-rules-title" className="text-2xl font-bold">
+        Incident alerts
+      </h2>
+      <p className="mt-1 text-ink-muted">
+        Who gets an e-mail when an incident is reported. The mail says what kind of incident, where and when, with a
+        link to the report; never the names of people or the description.
+      </p>
+      {rules.isPending && <Loading label="Loading the alert rules" />}
+      {rules.isError && (
+        <div className="mt-4">
+          <ErrorNotice title="Could not load the alert rules" error={rules.error} onRetry={() => rules.refetch()} retrying={rules.isFetching} />
+        </div>
+      )}
+      {rules.isSuccess && (
+        <div className="divide-y divide-line">
+          {ALERT_RULE_KEYS.map((key) => {
+            const rule = rules.data.rules.find((each) => each.key === key);
+            return rule && <AlertRuleForm key={key} rule={rule} />;
+          })}
+        </div>
+      )}
+    </Card>
+  );
+}
