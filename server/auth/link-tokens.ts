@@ -16,6 +16,12 @@ export const linkNotValid = () =>
 /** Where the e-mail's link leads: the token after `#`, so it never reaches a server log or a Referer. */
 export const accountLinkUrl = (publicUrl: string, token: string) => `${publicUrl}/account-link#token=${token}`;
 
+/**
+ * The text of a sent e-mail without the tokens of its links: the outbox keeps that much, so that
+ * once the e-mail is out, only the recipient's inbox opens the link, never a copy of the database.
+ */
+export const withoutLinkTokens = (text: string) => text.replace(/(\/account-link#token=)[A-Za-z0-9_-]+/g, '$1(in the e-mail only)');
+
 /** The link of this token when it can still be used; with a transaction, locked until it ends. */
 export async function usableLink(token: string, transaction?: Transaction) {
   const link = await AccountLink.findOne({

@@ -1,5 +1,6 @@
 import nodemailer from 'nodemailer';
 import { ConnectionError } from 'sequelize';
+import { withoutLinkTokens } from '../auth/link-tokens';
 import { OutboxMail } from '../models';
 import { CLAIM_MS, claimDueMail, listenForQueuedMail } from './outbox';
 
@@ -42,6 +43,8 @@ export function createMailDispatcher(settings: MailSettings) {
   let leave: (() => void) | undefined;
 
   const later = (work: () => void, ms: number) => {
+    // stop() may land while an attempt is still writing its outcome: it must not leave a timer behind.
+    if (stopped) return;
     const timer = setTimeout(() => {
       timers.delete(timer);
       work();
@@ -85,7 +88,7 @@ export function createMailDispatcher(settings: MailSettings) {
       later(() => guarded(() => attempt(id)), wait);
       return;
     }
-    await mail.update({ status: 'sent', sentAt: new Date(), lastError: null, claimedUntil: null });
+    await mail.update({ status: 'sent', sentAt: new Date(), lastError: null, claimedUntil: null, text: withoutLinkTokens(mail.text) });
   }
 
   /** Takes up the messages a stopped process left behind. */

@@ -10,11 +10,16 @@ export interface StoredPhoto {
   hasThumb: boolean;
 }
 
+/** A photo id never changes content: the browser may keep it for good, for this user only. */
+const KEEP_PRIVATELY = 'private, max-age=31536000, immutable';
+/** Shown, never kept: what the next person at a shared tablet must not find in its cache. */
+export const NEVER_KEEP = 'private, no-store';
+
 /**
  * Streams a photo (or its thumbnail) the caller may see: the type read from its content when it
- * was stored, inline, cached privately for good (a photo id never changes content).
+ * was stored, inline, with the caching its area allows.
  */
-export async function sendPhoto(res: Response, store: PhotoStore, photo: StoredPhoto, size: PhotoSize) {
+export async function sendPhoto(res: Response, store: PhotoStore, photo: StoredPhoto, size: PhotoSize, cacheControl = KEEP_PRIVATELY) {
   if (size === 'thumb' && !photo.hasThumb) throw new HttpError(404, 'no_thumbnail', 'This photo has no thumbnail: open the photo itself');
   const file = await store.open(photo.id, size);
   if (!file) throw notFound('Photo');
@@ -30,8 +35,7 @@ export async function sendPhoto(res: Response, store: PhotoStore, photo: StoredP
     'Content-Type': size === 'thumb' ? 'image/webp' : photo.contentType,
     'Content-Length': String(length),
     'Content-Disposition': 'inline',
-    // Only the team's members may keep a copy.
-    'Cache-Control': 'private, max-age=31536000, immutable',
+    'Cache-Control': cacheControl,
   });
   // A tablet that leaves mid-download is not a server fault.
   await pipeline(file.createReadStream(), res).catch(() => undefined);

@@ -11,7 +11,7 @@ import { readPhotoUpload } from '../middleware/photo-upload';
 import { Incident, IncidentPhoto } from '../models';
 import { processPhoto } from '../photos/photo-processing';
 import type { PhotoStore } from '../photos/photo-store';
-import { sendPhoto } from '../photos/send-photo';
+import { NEVER_KEEP, sendPhoto } from '../photos/send-photo';
 import { authorize } from '../policies/authorize';
 
 /** A report's photos: mounted at /api/incidents/:id/photos. The same rules as a ticket's photos. */
@@ -40,7 +40,8 @@ export function incidentPhotosRouter(store: PhotoStore) {
     viewOf(auth, incident);
     const photo = await IncidentPhoto.findOne({ where: { id: photoId, incidentId: incident.id } });
     if (!photo) throw notFound('Photo');
-    await sendPhoto(res, store, photo, size);
+    // People and injuries, as for the CSV: a tablet's browser cache must not show them to the next member at it.
+    await sendPhoto(res, store, photo, size, NEVER_KEEP);
   });
 
   router.delete('/:photoId', async (req, res) => {

@@ -1,7 +1,7 @@
 import { z } from 'zod';
 import type { Role } from '../roles';
 import { clientId, requiredOr, versionField } from './common';
-import { emailField, rolesField } from './session';
+import { emailField, MAX_PASSWORD_LENGTH, rolesField } from './session';
 
 /**
  * Alert rules: which incidents reach whom. `immediate` is every incident the safety contacts
@@ -130,7 +130,10 @@ export const accountLinkCheckSchema = z.object({ token: tokenField }).strict();
 export const accountLinkUseSchema = z
   .object({
     token: tokenField,
-    password: z.string(requiredOr('Enter a password')).min(1, { message: 'Enter a password' }).max(200),
+    password: z
+      .string(requiredOr('Enter a password'))
+      .min(1, { message: 'Enter a password' })
+      .max(MAX_PASSWORD_LENGTH, { message: `At most ${MAX_PASSWORD_LENGTH} characters` }),
   })
   .strict();
 

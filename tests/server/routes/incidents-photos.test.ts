@@ -43,13 +43,23 @@ describe('photos of a report', () => {
     expect(full.status).toBe(200);
     expect(full.headers['content-type']).toBe('image/jpeg');
     expect(full.headers['x-content-type-options']).toBe('nosniff');
-    expect(full.headers['cache-control']).toBe('private, max-age=31536000, immutable');
     const served = await sharp(full.body).metadata();
     expect([served.width, served.height, served.exif]).toEqual([48, 64, undefined]);
     const thumb = await fetchPhoto(own.as.crew, `${url}?size=thumb`);
     expect(thumb.headers['content-type']).toBe('image/webp');
 
     expect(await own.read()).toMatchObject({ version: 0, photos: [photo] });
+  });
+
+  it('is never kept by the browser: a shared pit tablet must not show an injury to whoever signs in next', async () => {
+    const own = await ownReport();
+    const photo = await addIncidentPhoto(own.as.crew, own.report.id);
+    const url = incidentPhotoUrl(own.report.id, photo.id);
+    for (const [client, size] of [[own.as.safety, ''], [own.as.safety, '?size=thumb'], [own.as.crew, '']] as const) {
+      const served = await fetchPhoto(client, `${url}${size}`);
+      expect(served.status).toBe(200);
+      expect(served.headers['cache-control']).toBe('private, no-store');
+    }
   });
 
   it('refuses what is not a photo (415) and a file over 10 MB (413), storing nothing', async () => {

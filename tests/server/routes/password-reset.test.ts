@@ -7,7 +7,7 @@ import { RESETS_PER_EMAIL_PER_HOUR } from '../../../server/commands/request-pass
 import { signIn, testApp } from '../../support/app';
 import { invalid } from '../../support/errors';
 import { joinTeam, makeTeamWithoutEvent, PASSWORD, uniqueEmail } from '../../support/factories';
-import { linkTokenIn, waitForMailTo } from '../../support/mail';
+import { linkTokenIn, waitForMailTo, waitForOutbox } from '../../support/mail';
 
 const { app } = testApp();
 let team: Awaited<ReturnType<typeof makeTeamWithoutEvent>>;
@@ -89,6 +89,17 @@ describe('POST /api/session/password-reset', () => {
     expect((await check(first)).body).toEqual(LINK_NOT_VALID);
   });
 
+  it('keeps no usable link in the outbox once the mail is sent: a copy of the database opens nothing', async () => {
+    const email = team.emails.admin;
+    await requestReset(email);
+    const token = await resetToken(email);
+    const sent = await waitForOutbox({ toAddress: email, kind: 'password_reset' }, 'sent');
+    expect(sent.text).not.toContain(token);
+    expect(sent.subject).toBe('Choose a new Pitwright password');
+    // Only the stored copy lost it: the link in the e-mail still works.
+    expect((await check(token)).status).toBe(200);
+  });
+
   it('refuses a link past its 60 minutes', async () => {
     const email = team.emails.safety;
     await requestReset(email);
@@ -108,6 +119,9 @@ describe('POST /api/session/password-reset', () => {
     const short = await use(token, 'short');
     expect(short.status).toBe(400);
     expect(short.body).toEqual(invalid({ password: 'At least 10 characters' }));
+    const long = await use(token, 'a'.repeat(201));
+    expect(long.status).toBe(400);
+    expect(long.body).toEqual(invalid({ password: 'At most 200 characters' }));
     expect(await signInStatus(email, PASSWORD)).toBe(200);
     expect((await use(token, NEW_PASSWORD)).status).toBe(200);
   });
