@@ -1,12 +1,14 @@
 /**
- * `npm run bench`: figures, no assertions. Five parts:
+ * `npm run bench`: figures, no assertions. Six parts:
  *  1. the timeline computation for 200 matches (median time per call, in-process);
  *  2. the battery rotation plan for 150 matches × 24 batteries × 6 bays, and with each doubled (in-process);
  *  3. request rates and latencies of the main reads against a running Pitwright (`npm start`);
  *  4. fan-out: from a field mark to its receipt on 50 connected sockets (p50, p95, p99);
- *  5. the repair board: its read at 20 connections, and card moves one after another (write → answer).
+ *  5. the repair board: its read at 20 connections, and card moves one after another (write → answer);
+ *  6. the safety log: its read and its CSV export at 20 connections, as the safety captain (reads only:
+ *     a safety log keeps every report, so the bench adds none).
  * Loopback only. BENCH_URL (default http://127.0.0.1:5180), BENCH_SECONDS (5), BENCH_CONNECTIONS (20).
- * BENCH_ONLY picks parts by name (timeline, plan, reads, fanout, repairs; comma-separated): `BENCH_ONLY=plan
+ * BENCH_ONLY picks parts by name (timeline, plan, reads, fanout, repairs, incidents; comma-separated): `BENCH_ONLY=plan
  * npm run bench` needs no server. Part 4 marks the demo's next match and undoes it again, and part 5
  * moves a demo card back and forth an even number of times, so the data ends as it began (but for
  * the card's version and history).
@@ -202,9 +204,20 @@ async function benchRepairs(crew, { moves = 40 } = {}) {
   console.log(`  ${moves} card moves one after another: p50 ${ms(percentile(latencies, 50))} ms, p99 ${ms(percentile(latencies, 99))} ms\n`);
 }
 
+async function benchIncidents(safety) {
+  const log = await fetch(`${baseUrl}/api/incidents`, { headers: { cookie: safety.cookie } }).then((r) => r.json());
+  console.log(`incidents: the log of ${log.incidents.length} reports, ${connections} connections, ${duration} s per path`);
+  for (const path of ['/api/incidents', '/api/incidents.csv']) {
+    const result = await autocannon({ url: `${baseUrl}${path}`, connections, duration, headers: { cookie: safety.cookie } });
+    console.log(`  ${path.padEnd(20)} ${Math.round(result.requests.average)} req/s, p50 ${result.latency.p50} ms, p99 ${result.latency.p99} ms, ${result.non2xx} non-2xx`);
+  }
+  console.log('');
+}
+
 if (runs('reads') || runs('fanout')) {
   const viewer = await signIn('viewer');
   if (runs('reads')) await benchReads(viewer.cookie);
   if (runs('fanout')) await benchFanOut(viewer, await signIn('lead'));
 }
 if (runs('repairs')) await benchRepairs(await signIn('crew'));
+if (runs('incidents')) await benchIncidents(await signIn('safety'));
