@@ -35,6 +35,9 @@ export function isApiError(error: unknown, code?: string): error is ApiError {
   return error instanceof ApiError && (code === undefined || error.code === code);
 }
 
+/** A 404: the record is not (or no longer) there, e.g. removed by a send whose answer was lost. */
+export const isNotFound = (error: unknown) => isApiError(error) && error.status === 404;
+
 /**
  * What the client needs from the session without importing the session feature: the app wires
  * these in at start-up (src/app/api-wiring.ts).

@@ -53,3 +53,6 @@ export function readableZone(timeZone: string): string {
 export function formatDateTime(at: string): string {
   return new Date(at).toLocaleString(undefined, { weekday: 'short', day: 'numeric', month: 'short', hour: 'numeric', minute: '2-digit' });
 }
+
+/** This device's time zone: the clock of a record outside any event. */
+export const deviceTimeZone = (): string => Intl.DateTimeFormat().resolvedOptions().timeZone;

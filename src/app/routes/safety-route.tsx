@@ -10,17 +10,22 @@ import { IncidentPage } from '../../features/safety/components/incident-page';
 import { SafetyPrintPage } from '../../features/safety/components/print-page';
 import { ReportIncidentPage } from '../../features/safety/components/report-incident-page';
 import type { IncidentBattery } from '../../features/safety/components/report-choices';
-import type { SafetyEvent } from '../../features/safety/components/safety-event';
+import { timeZoneIn, type SafetyEvent } from '../../features/safety/components/safety-event';
 import { SafetyPage } from '../../features/safety/components/safety-page';
 import { membersQueryOptions } from '../../features/team/api/get-members';
 import { useCan } from '../../lib/authorization';
+import { deviceTimeZone } from '../../lib/dates';
 
-/** The team's events (events feature) as the safety area names them, or what to show while they load. */
+/**
+ * The team's events (events feature) as the safety area names them, or what to show while they
+ * load. Once loaded they stay: a refetch that fails on the arena Wi-Fi must not take away the
+ * report being typed.
+ */
 function WithEvents({ label, children }: { label: string; children: (events: SafetyEvent[]) => ReactNode }) {
   const events = useEvents();
-  if (events.isPending) return <Loading label={label} />;
+  if (events.data) return children(events.data);
   if (events.isError) return <ErrorNotice title="Could not load the events" error={events.error} onRetry={() => events.refetch()} retrying={events.isFetching} />;
-  return children(events.data);
+  return <Loading label={label} />;
 }
 
 /** The safety log and cautions, filtered by the team's events. */
@@ -32,9 +37,6 @@ export function SafetyRoute() {
 export function SafetyPrintRoute() {
   return <WithEvents label="Opening the print view">{(events) => <SafetyPrintPage events={events} />}</WithEvents>;
 }
-
-// Outside an event a report is read on the tablet's own clock.
-const here = Intl.DateTimeFormat().resolvedOptions().timeZone;
 
 /** The fleet (batteries feature) as a report names a battery: those in service. */
 function useBatteriesInService(enabled = true): IncidentBattery[] | undefined {
@@ -49,7 +51,7 @@ export function ReportIncidentRoute() {
     <WithEvents label="Opening the form">
       {(events) => {
         const current = events.find((event) => event.current);
-        return <ReportIncidentPage eventId={current?.id ?? null} timeZone={current?.timeZone ?? here} batteries={inService} />;
+        return <ReportIncidentPage eventId={current?.id ?? null} timeZone={current?.timeZone ?? deviceTimeZone()} batteries={inService} />;
       }}
     </WithEvents>
   );
@@ -67,6 +69,5 @@ export function IncidentRoute() {
     () => members?.filter((member) => member.active).map((member) => ({ id: member.id, name: member.name })).sort((a, b) => a.name.localeCompare(b.name)),
     [members],
   );
-  const timeZoneOf = (eventId: string | null) => events.data?.find((event) => event.id === eventId)?.timeZone;
-  return <IncidentPage key={incidentId} incidentId={incidentId} timeZoneOf={timeZoneOf} owners={owners} batteries={batteries} />;
+  return <IncidentPage key={incidentId} incidentId={incidentId} timeZoneOf={timeZoneIn(events.data)} owners={owners} batteries={batteries} />;
 }

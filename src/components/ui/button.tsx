@@ -22,7 +22,8 @@ const sizes: Record<Size, string> = {
   lg: 'min-h-14 px-6 text-lg',
 };
 
-function buttonClass(variant: Variant = 'primary', size: Size = 'md', extra = ''): string {
+/** A button's look, for the odd element that must be something else (a plain `<a download>`). */
+export function buttonClass(variant: Variant = 'primary', size: Size = 'md', extra = ''): string {
   return `${base} ${variants[variant]} ${sizes[size]} ${extra}`;
 }
 

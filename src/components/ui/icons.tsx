@@ -1,9 +1,13 @@
 import type { SVGProps } from 'react';
 
-type IconProps = SVGProps<SVGSVGElement>;
+export type IconProps = SVGProps<SVGSVGElement>;
 
-// Icons always sit next to a word, so they are hidden from assistive technology.
-function Icon({ children, className = 'size-6', ...props }: IconProps) {
+/**
+ * The drawing rules of every icon (this file, action-icons.tsx, safety-icons.tsx, an area's own):
+ * a 24-unit stroke drawing. Icons always sit next to a word, so they are hidden from assistive
+ * technology.
+ */
+export function Icon({ children, className = 'size-6', ...props }: IconProps) {
   return (
     <svg
       viewBox="0 0 24 24"

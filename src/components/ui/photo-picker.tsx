@@ -1,4 +1,5 @@
 import { useEffect, useRef, useState, type ChangeEvent } from 'react';
+import { isApiError } from '../../lib/api-client';
 import { CameraIcon, PhotoIcon } from './action-icons';
 import { Spinner } from './loading';
 
@@ -8,6 +9,23 @@ const PREVIEW_WIDTH = 240;
 export function photoProblem(file: File, maxBytes: number): string | null {
   if (file.size > maxBytes) return `This photo is ${(file.size / 1024 / 1024).toFixed(1)} MB; at most ${maxBytes / 1024 / 1024} MB.`;
   return null;
+}
+
+/** Why an upload failed, in words: the server's message about the photo first. */
+export function photoUploadMessage(error: unknown): string | undefined {
+  if (isApiError(error)) return error.fields.photo ?? error.message;
+  return error instanceof Error ? error.message : undefined;
+}
+
+/** Sends a picked photo unless it is too big; `tooBig` says why the last one was refused before sending. */
+export function useAddPhoto(send: (file: File) => void, maxBytes: number) {
+  const [tooBig, setTooBig] = useState<string | null>(null);
+  function add(file: File) {
+    const problem = photoProblem(file, maxBytes);
+    setTooBig(problem);
+    if (!problem) send(file);
+  }
+  return { add, tooBig };
 }
 
 interface PhotoPickerProps {

@@ -1,27 +1,6 @@
-import type { SVGProps } from 'react';
+import { Icon, type IconProps } from './icons';
 
-type IconProps = SVGProps<SVGSVGElement>;
-
-// Drawn like icons.tsx: always beside a word, so hidden from assistive technology. The hazard
-// shapes serve both the battery pages and the safety area.
-function Icon({ children, className = 'size-6', ...props }: IconProps) {
-  return (
-    <svg
-      viewBox="0 0 24 24"
-      fill="none"
-      stroke="currentColor"
-      strokeWidth={2}
-      strokeLinecap="round"
-      strokeLinejoin="round"
-      aria-hidden="true"
-      focusable="false"
-      className={`shrink-0 ${className}`}
-      {...props}
-    >
-      {children}
-    </svg>
-  );
-}
+// The hazard shapes serve both the battery pages and the safety area.
 
 /** Safety glasses. */
 export const GogglesIcon = (p: IconProps) => (

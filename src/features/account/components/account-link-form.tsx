@@ -50,8 +50,11 @@ interface AccountLinkFormProps {
   token: string;
   link: AccountLinkJson;
   onSignedIn: (session: SessionJson) => void;
-  /** The link was used or ran out between the check and the send. */
-  onLinkGone: () => void;
+  /**
+   * The link was used or ran out between the check and the send; `afterLostAnswer` when the send
+   * before this one got no answer, so that one may well have used it.
+   */
+  onLinkGone: (afterLostAnswer: boolean) => void;
 }
 
 export function AccountLinkForm({ token, link, onSignedIn, onLinkGone }: AccountLinkFormProps) {
@@ -67,10 +70,11 @@ export function AccountLinkForm({ token, link, onSignedIn, onLinkGone }: Account
     const parsed = parseForm(choosesPassword ? newPasswordSchema : accountLinkUseSchema, { token, password });
     setClientErrors(parsed.ok ? {} : parsed.errors);
     if (!parsed.ok) return;
+    const lostBefore = isApiError(redeem.error) && (redeem.error.status === 0 || redeem.error.status >= 500);
     redeem.mutate(parsed.data, {
       onSuccess: onSignedIn,
       onError: (error) => {
-        if (isApiError(error, 'link_not_valid')) onLinkGone();
+        if (isApiError(error, 'link_not_valid')) onLinkGone(lostBefore);
       },
     });
   }

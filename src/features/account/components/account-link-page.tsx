@@ -18,9 +18,9 @@ function tokenOf(hash: string): string | null {
 
 function CheckedLink({ token, onSignedIn }: { token: string; onSignedIn: (session: SessionJson) => void }) {
   const link = useAccountLink(token);
-  const [gone, setGone] = useState(false);
+  const [gone, setGone] = useState<{ afterLostAnswer: boolean } | null>(null);
   if (link.isPending) return <Loading label="Checking the link" />;
-  if (gone || isApiError(link.error, 'link_not_valid')) return <LinkNotValid />;
+  if (gone || isApiError(link.error, 'link_not_valid')) return <LinkNotValid afterLostAnswer={gone?.afterLostAnswer} />;
   if (link.isError) {
     return (
       <div className="w-full max-w-md">
@@ -28,7 +28,7 @@ function CheckedLink({ token, onSignedIn }: { token: string; onSignedIn: (sessio
       </div>
     );
   }
-  return <AccountLinkForm token={token} link={link.data} onSignedIn={onSignedIn} onLinkGone={() => setGone(true)} />;
+  return <AccountLinkForm token={token} link={link.data} onSignedIn={onSignedIn} onLinkGone={(afterLostAnswer) => setGone({ afterLostAnswer })} />;
 }
 
 /**

@@ -1,10 +1,34 @@
 import { INVITE_VALID_DAYS, RESET_VALID_MINUTES } from '@shared/schemas/mail';
 import { LinkButton } from '../../../components/ui/button';
-import { AlertIcon } from '../../../components/ui/icons';
+import { AlertIcon, CheckIcon } from '../../../components/ui/icons';
 import { signedOutPanelClass } from '../../../components/ui/signed-out-page';
 
-/** One message for an unknown, used, revoked or expired link: the server does not say which either. */
-export function LinkNotValid() {
+/**
+ * One message for an unknown, used, revoked or expired link: the server does not say which either.
+ * `afterLostAnswer`: the send before got no answer (the Wi-Fi dropped), so most likely it was that
+ * send which used the link, and the password typed is already the account's.
+ */
+export function LinkNotValid({ afterLostAnswer = false }: { afterLostAnswer?: boolean }) {
+  if (afterLostAnswer) {
+    return (
+      <section aria-labelledby="not-valid-title" className={signedOutPanelClass}>
+        <h1 id="not-valid-title" className="flex items-center gap-2 text-2xl font-bold">
+          <CheckIcon className="size-7 text-ok" /> Your first try most likely went through
+        </h1>
+        <p className="text-lg">
+          The connection dropped before the answer came back, and the link has been used since: most likely by that try. Sign in with the password you just
+          entered.
+        </p>
+        <p className="text-ink-muted">If it does not work, get a new password link, or ask a mentor of the team to send a new invite.</p>
+        <div className="flex flex-wrap gap-3">
+          <LinkButton to="/sign-in">Sign in</LinkButton>
+          <LinkButton to="/forgot-password" variant="secondary">
+            Get a new password link
+          </LinkButton>
+        </div>
+      </section>
+    );
+  }
   return (
     <section aria-labelledby="not-valid-title" className={signedOutPanelClass}>
       <h1 id="not-valid-title" className="flex items-center gap-2 text-2xl font-bold">

@@ -1,26 +1,4 @@
-import type { SVGProps } from 'react';
-
-type IconProps = SVGProps<SVGSVGElement>;
-
-// Drawn like src/components/ui/icons.tsx: always beside a word, so hidden from assistive technology.
-function Icon({ children, className = 'size-6', ...props }: IconProps) {
-  return (
-    <svg
-      viewBox="0 0 24 24"
-      fill="none"
-      stroke="currentColor"
-      strokeWidth={2}
-      strokeLinecap="round"
-      strokeLinejoin="round"
-      aria-hidden="true"
-      focusable="false"
-      className={`shrink-0 ${className}`}
-      {...props}
-    >
-      {children}
-    </svg>
-  );
-}
+import { Icon, type IconProps } from '../../../components/ui/icons';
 
 export const BoltIcon = (p: IconProps) => (
   <Icon {...p}>

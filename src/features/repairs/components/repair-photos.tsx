@@ -1,11 +1,11 @@
 import { useState } from 'react';
 import { REPAIR_PHOTO_MAX_BYTES, REPAIR_PHOTOS_MAX, type RepairDetailJson, type RepairPhotoJson } from '@shared/schemas/repairs';
-import { PhotoIcon, TrashIcon } from '../../../components/ui/action-icons';
+import { TrashIcon } from '../../../components/ui/action-icons';
 import { Button } from '../../../components/ui/button';
 import { Dialog } from '../../../components/ui/dialog';
 import { ErrorNotice } from '../../../components/ui/error-notice';
-import { PhotoPicker, photoProblem } from '../../../components/ui/photo-picker';
-import { isApiError } from '../../../lib/api-client';
+import { PhotoPicker, photoUploadMessage, useAddPhoto } from '../../../components/ui/photo-picker';
+import { PhotoThumbLink } from '../../../components/ui/photo-thumb';
 import { useCan, useViewer } from '../../../lib/authorization';
 import { useDeletePhoto } from '../api/delete-photo';
 import { useUploadPhoto } from '../api/upload-photo';
@@ -22,19 +22,12 @@ function PhotoTile({ photo, position, title, when, canRemove, onRemove }: {
   const name = `Photo ${position} of ‘${title}’`;
   return (
     <li className="flex flex-col gap-1.5">
-      <a href={photo.url} target="_blank" rel="noopener" className="block overflow-hidden rounded-xl border-2 border-line bg-sunken">
-        {photo.hasThumb && photo.thumbUrl ? (
-          <img src={photo.thumbUrl} alt={`${name}, added by ${photo.uploadedBy.displayName}`} loading="lazy" className="aspect-[4/3] w-full object-cover" />
-        ) : (
-          // A HEIC the server could not read: no preview, but the photo itself opens on devices that can show it.
-          <span className="flex aspect-[4/3] w-full flex-col items-center justify-center gap-1 p-2 text-center">
-            <PhotoIcon className="size-9 text-ink-muted" />
-            <span className="font-semibold">{photo.contentType === 'image/heic' || photo.contentType === 'image/heif' ? 'HEIC photo' : 'Photo'}</span>
-            <span className="text-sm text-accent-ink underline">Open it</span>
-            <span className="sr-only">{name}</span>
-          </span>
-        )}
-      </a>
+      <PhotoThumbLink
+        href={photo.url}
+        thumbSrc={photo.hasThumb ? photo.thumbUrl : null}
+        name={photo.hasThumb && photo.thumbUrl ? `${name}, added by ${photo.uploadedBy.displayName}` : name}
+        contentType={photo.contentType}
+      />
       <div className="flex flex-wrap items-center justify-between gap-x-2">
         <p className="min-w-0 text-sm text-ink-muted">
           {photo.uploadedBy.displayName} · <span className="tabular-nums">{when}</span>
@@ -57,15 +50,8 @@ export function RepairPhotos({ ticket, timeZone, now }: { ticket: RepairDetailJs
   const upload = useUploadPhoto(ticket);
   const remove = useDeletePhoto(ticket);
   const [removing, setRemoving] = useState<RepairPhotoJson | null>(null);
-  const [tooBig, setTooBig] = useState<string | null>(null);
   const full = ticket.photos.length >= REPAIR_PHOTOS_MAX;
-  const uploadMessage = isApiError(upload.error) ? (upload.error.fields.photo ?? upload.error.message) : upload.error?.message;
-
-  function add(file: File) {
-    const problem = photoProblem(file, REPAIR_PHOTO_MAX_BYTES);
-    setTooBig(problem);
-    if (!problem) upload.mutate(file);
-  }
+  const { add, tooBig } = useAddPhoto(upload.mutate, REPAIR_PHOTO_MAX_BYTES);
 
   return (
     <section aria-labelledby="repair-photos-title" className="flex flex-col gap-3">
@@ -94,7 +80,7 @@ export function RepairPhotos({ ticket, timeZone, now }: { ticket: RepairDetailJs
       )}
       {full && canWork && <p className="text-ink-muted">A ticket holds {REPAIR_PHOTOS_MAX} photos; remove one to add another.</p>}
       {tooBig && <p className="font-semibold text-danger">{tooBig}</p>}
-      {upload.isError && <ErrorNotice title="The photo was not added" error={new Error(uploadMessage ?? 'Something went wrong.')} />}
+      {upload.isError && <ErrorNotice title="The photo was not added" error={new Error(photoUploadMessage(upload.error) ?? 'Something went wrong.')} />}
       {remove.isError && <ErrorNotice title="The photo was not removed" error={remove.error} />}
       <Dialog
         open={removing !== null}

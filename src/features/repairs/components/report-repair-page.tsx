@@ -6,7 +6,7 @@ import { ErrorNotice } from '../../../components/ui/error-notice';
 import { controlClass, Field, TextField } from '../../../components/ui/field';
 import { Loading } from '../../../components/ui/loading';
 import { PageHeader } from '../../../components/ui/page-header';
-import { PhotoPicker, PickedPhoto, photoProblem } from '../../../components/ui/photo-picker';
+import { PhotoPicker, PickedPhoto, photoProblem, photoUploadMessage } from '../../../components/ui/photo-picker';
 import { isApiError } from '../../../lib/api-client';
 import type { FieldErrors } from '../../../lib/form-errors';
 import { newId } from '../../../lib/new-id';
@@ -70,7 +70,7 @@ export function ReportRepairPage({ eventId, matches, defaultMatchId, assignees }
     if (!photoProblem(file, REPAIR_PHOTO_MAX_BYTES)) sendPhoto(file);
   }
 
-  const uploadMessage = upload.error ? (isApiError(upload.error) ? (upload.error.fields.photo ?? upload.error.message) : upload.error.message) : null;
+  const uploadMessage = photoUploadMessage(upload.error);
   const saveProblem = create.error && !(isApiError(create.error, 'invalid') && Object.keys(errors).length > 0) ? create.error : null;
 
   return (

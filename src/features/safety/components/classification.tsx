@@ -1,8 +1,8 @@
 import { alertRuleFor, isEscalation } from '@shared/domain/incident-alert';
 import { classifyIncident, immediateAlertReasons, type IncidentClassification, type IncidentKind, type TreatmentCode } from '@shared/domain/incident-classification';
+import { FirstThingsFirst } from '../../../components/ui/first-things-first';
 import { ClassTag } from './class-tag';
 import { basisText, listWords, REASON_LABELS } from './incident-words';
-import { FirstThingsFirst } from './safety-cautions';
 
 /** Who hears of a report when it is sent: the alert rules are the team's, so the words say whose rule decides. */
 export function whoIsTold(kind: IncidentKind, treatments: readonly TreatmentCode[]): string {

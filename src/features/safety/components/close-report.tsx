@@ -30,6 +30,8 @@ function CloseForm({ incident, writer }: { incident: IncidentJson; writer: Incid
       form: CLOSE_FORM,
       what: retire ? `close the report and retire battery ${incident.batteryName}` : 'close the report',
       apply: (on) => ({ status: 'closed', closingNote, ...(retire && on.batteryId ? { retireBattery: true } : {}) }),
+      // Closed with this very note: the send whose answer was lost went through (battery and all).
+      isIn: (on) => on.status === 'closed' && on.closingNote === closingNote,
     });
   }
 
@@ -76,7 +78,7 @@ export function CloseReport({ incident, writer, timeZone }: { incident: Incident
             icon={<UndoIcon className="size-5" />}
             pending={writer.pendingFor(REOPEN_FORM)}
             disabled={writer.pending}
-            onClick={() => writer.write({ form: REOPEN_FORM, what: 'reopen the report', apply: () => ({ status: 'open' }) })}
+            onClick={() => writer.write({ form: REOPEN_FORM, what: 'reopen the report', apply: () => ({ status: 'open' }), isIn: (on) => on.status === 'open' })}
           >
             Reopen the report
           </Button>

@@ -3,6 +3,7 @@ import type { IncidentJson } from '@shared/schemas/incidents';
 import { Button } from '../../../components/ui/button';
 import { ErrorNotice } from '../../../components/ui/error-notice';
 import { isApiError } from '../../../lib/api-client';
+import { useFocusFirstInvalid } from '../../../lib/focus-invalid';
 import type { FieldErrors } from '../../../lib/form-errors';
 import { ClassificationPreview } from './classification';
 import type { IncidentBattery } from './report-choices';
@@ -32,6 +33,7 @@ export function EditReport({ incident, latest, writer, timeZone, batteries, onDo
   const [clientErrors, setClientErrors] = useState<FieldErrors>({});
   const error = writer.errorFor(EDIT_FORM);
   const errors = reportErrorsOf(clientErrors, error);
+  const form = useFocusFirstInvalid(clientErrors, error);
   const set = <K extends keyof ReportValues>(field: K) => (value: ReportValues[K]) => setValues((old) => ({ ...old, [field]: value }));
   // A battery retired since the report still shows as its choice.
   const choices = useMemo(
@@ -49,11 +51,22 @@ export function EditReport({ incident, latest, writer, timeZone, batteries, onDo
     // A newer version that changed none of these fields cannot conflict with them: save on it
     // rather than ask. One that did is answered stale, and the notice shows theirs.
     const untouched = editedBetween(incident, latest).every((field) => !(field in changes));
-    writer.write({ form: EDIT_FORM, what: 'your edits to the report', apply: () => changes, onSaved: onDone, onDropped: onDone }, untouched ? latest : incident);
+    writer.write(
+      {
+        form: EDIT_FORM,
+        what: 'your edits to the report',
+        apply: () => changes,
+        // Every field as typed already: a send whose answer was lost saved them.
+        isIn: (on) => Object.keys(reportChanges(on, read.data, timeZone)).length === 0,
+        onSaved: onDone,
+        onDropped: onDone,
+      },
+      untouched ? latest : incident,
+    );
   }
 
   return (
-    <form noValidate onSubmit={submit} aria-label="Edit the report" className="flex flex-col gap-6">
+    <form ref={form} noValidate onSubmit={submit} aria-label="Edit the report" className="flex flex-col gap-6">
       <ReportFields values={values} onChange={set} errors={errors} batteries={choices} />
       <ClassificationPreview kind={values.kind} treatments={values.treatments} before={incident} />
       {error && !isApiError(error, 'invalid') && <ErrorNotice title="Not saved" error={error} />}

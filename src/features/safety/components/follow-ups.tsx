@@ -8,6 +8,7 @@ import { PlusIcon } from '../../../components/ui/icons';
 import { TrashIcon } from '../../../components/ui/action-icons';
 import { isApiError } from '../../../lib/api-client';
 import type { FieldErrors } from '../../../lib/form-errors';
+import { newId } from '../../../lib/new-id';
 import { useServerNow } from '../../../lib/server-clock';
 import { formatDay } from './incident-words';
 import type { IncidentWriter } from './use-incident-write';
@@ -22,6 +23,8 @@ const asInput = ({ id, text, ownerId, dueOn, done }: FollowUpJson) => ({ id, tex
 const ADD_FORM = 'follow-up-add';
 
 function AddFollowUp({ writer, owners }: { writer: IncidentWriter; owners: FollowUpOwner[] | undefined }) {
+  // Kept through failed sends, like a report's id: a resend after a lost answer finds the first.
+  const [id, setId] = useState(newId);
   const [text, setText] = useState('');
   const [ownerId, setOwnerId] = useState('');
   const [dueOn, setDueOn] = useState('');
@@ -40,12 +43,14 @@ function AddFollowUp({ writer, owners }: { writer: IncidentWriter; owners: Follo
     if (!dateOnlyField.safeParse(dueOn).success) found.dueOn = 'Choose the day it is due';
     setClientErrors(found);
     if (Object.keys(found).length > 0) return;
-    const added = { text: text.trim(), ownerId, dueOn, done: false };
+    const added = { id, text: text.trim(), ownerId, dueOn, done: false };
     writer.write({
       form: ADD_FORM,
       what: `add the follow-up ‘${added.text}’`,
       apply: (incident) => ({ followUps: [...incident.followUps.map(asInput), added] }),
+      isIn: (incident) => incident.followUps.some((item) => item.id === id),
       onSaved: () => {
+        setId(newId());
         setText('');
         setOwnerId('');
         setDueOn('');
@@ -87,11 +92,17 @@ function FollowUpRow({ item, writer, today }: { item: FollowUpJson; writer: Inci
       form,
       what: `${on ? 'tick' : 'untick'} ‘${item.text}’`,
       apply: (incident) => ({ followUps: incident.followUps.map((other) => (other.id === item.id ? { ...asInput(other), done: on } : asInput(other))) }),
+      isIn: (incident) => incident.followUps.some((other) => other.id === item.id && other.done === on),
       onSettled: () => setAsked(null),
     });
   };
   const remove = () =>
-    writer.write({ form, what: `remove ‘${item.text}’`, apply: (incident) => ({ followUps: incident.followUps.filter((other) => other.id !== item.id).map(asInput) }) });
+    writer.write({
+      form,
+      what: `remove ‘${item.text}’`,
+      apply: (incident) => ({ followUps: incident.followUps.filter((other) => other.id !== item.id).map(asInput) }),
+      isIn: (incident) => !incident.followUps.some((other) => other.id === item.id),
+    });
   const error = writer.errorFor(form);
   return (
     <li className="flex flex-col gap-2 rounded-xl border-2 border-line p-3 has-checked:border-ok">

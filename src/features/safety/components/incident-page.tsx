@@ -1,10 +1,11 @@
-import { useState } from 'react';
+import { useEffect, useRef, useState } from 'react';
 import type { IncidentJson } from '@shared/schemas/incidents';
 import { Button, LinkButton } from '../../../components/ui/button';
 import { ErrorNotice } from '../../../components/ui/error-notice';
+import { FirstThingsFirst } from '../../../components/ui/first-things-first';
 import { PencilIcon } from '../../../components/ui/icons';
 import { Loading } from '../../../components/ui/loading';
-import { isApiError } from '../../../lib/api-client';
+import { isApiError, isNotFound } from '../../../lib/api-client';
 import { useCan } from '../../../lib/authorization';
 import { useIncident } from '../api/get-incident';
 import { CloseReport } from './close-report';
@@ -13,17 +14,13 @@ import { FollowUps, type FollowUpOwner } from './follow-ups';
 import { IncidentDetails, IncidentHeading } from './incident-details';
 import { IncidentPhotos } from './incident-photos';
 import type { IncidentBattery } from './report-choices';
-import { FirstThingsFirst } from './safety-cautions';
 import { StaleIncidentNotice } from './stale-incident-notice';
 import { useIncidentWrite } from './use-incident-write';
 
-// A report outside any event, or of an event the route knows no zone for: the tablet's own clock.
-const here = Intl.DateTimeFormat().resolvedOptions().timeZone;
-
 interface IncidentPageProps {
   incidentId: string;
-  /** The time zone of a report's event (from the events feature), if known. */
-  timeZoneOf: (eventId: string | null) => string | undefined;
+  /** Whose clock a report is read on: its event's (from the events feature), else this device's. */
+  timeZoneOf: (eventId: string | null) => string;
   /** Active members, who may own a follow-up; undefined while they load. */
   owners: FollowUpOwner[] | undefined;
   /** The team's batteries in service, to correct the one a report names. */
@@ -53,6 +50,16 @@ function FullReport({ incident, timeZone, owners, batteries }: { incident: Incid
   const writer = useIncidentWrite(incident);
   const canManage = useCan('incidents:manage');
   const [editing, setEditing] = useState<IncidentJson | null>(null);
+  // Opening the form moves into it, closing it goes back to its button: the keyboard's place is
+  // never lost with the element that had it.
+  const details = useRef<HTMLElement>(null);
+  const wasEditing = useRef(false);
+  const isEditing = editing !== null;
+  useEffect(() => {
+    if (isEditing) details.current?.querySelector<HTMLElement>('form input, form select, form textarea')?.focus();
+    else if (wasEditing.current) details.current?.querySelector<HTMLElement>('button')?.focus();
+    wasEditing.current = isEditing;
+  }, [isEditing]);
   return (
     <article aria-labelledby="incident-title" className="flex max-w-4xl flex-col gap-8">
       <header className="flex flex-col gap-3">
@@ -62,7 +69,7 @@ function FullReport({ incident, timeZone, owners, batteries }: { incident: Incid
       {writer.conflict && (
         <StaleIncidentNotice conflict={writer.conflict} timeZone={timeZone} pending={writer.pending} onKeepMine={writer.keepMine} onTakeTheirs={writer.takeTheirs} />
       )}
-      <section aria-labelledby="incident-details-title" className="flex flex-col gap-4">
+      <section ref={details} aria-labelledby="incident-details-title" className="flex flex-col gap-4">
         <div className="flex flex-wrap items-center justify-between gap-3">
           <h2 id="incident-details-title" className="text-2xl font-bold">
             {editing ? 'Edit the report' : 'What was reported'}
@@ -112,15 +119,29 @@ function ReporterView({ incident, timeZone }: { incident: IncidentJson; timeZone
 /** One report: all of it for safety and admin, what was sent and its status for its reporter. */
 export function IncidentPage({ incidentId, timeZoneOf, owners, batteries }: IncidentPageProps) {
   const incident = useIncident(incidentId);
-  if (incident.isPending) return <Loading label="Loading the report" />;
-  if (incident.isError) {
-    if (isApiError(incident.error) && incident.error.status === 404) return <Refusal title="No such report" text="It may be from an older link, or of another team." />;
-    if (isApiError(incident.error) && incident.error.status === 403) {
-      return <Refusal title="Not your report" text="Reports are for the safety captains, the mentors and the one who sent it." />;
-    }
-    return <ErrorNotice title="Could not load the report" error={incident.error} onRetry={() => incident.refetch()} retrying={incident.isFetching} />;
+  if (isNotFound(incident.error)) return <Refusal title="No such report" text="It may be from an older link, or of another team." />;
+  if (isApiError(incident.error) && incident.error.status === 403) {
+    return <Refusal title="Not your report" text="Reports are for the safety captains, the mentors and the one who sent it." />;
   }
-  const timeZone = timeZoneOf(incident.data.eventId) ?? here;
-  if (incident.data.view === 'reporter') return <ReporterView incident={incident.data} timeZone={timeZone} />;
-  return <FullReport incident={incident.data} timeZone={timeZone} owners={owners} batteries={batteries} />;
+  // A refetch that failed on the arena Wi-Fi keeps the report on screen, and with it the
+  // follow-up, closing note or correction being typed.
+  if (!incident.data) {
+    if (incident.isError) return <ErrorNotice title="Could not load the report" error={incident.error} onRetry={() => incident.refetch()} retrying={incident.isFetching} />;
+    return <Loading label="Loading the report" />;
+  }
+  const timeZone = timeZoneOf(incident.data.eventId);
+  return (
+    <>
+      {incident.isError && (
+        <div className="mb-6">
+          <ErrorNotice title="Could not reload the report: this is how it was" error={incident.error} onRetry={() => incident.refetch()} retrying={incident.isFetching} />
+        </div>
+      )}
+      {incident.data.view === 'reporter' ? (
+        <ReporterView incident={incident.data} timeZone={timeZone} />
+      ) : (
+        <FullReport incident={incident.data} timeZone={timeZone} owners={owners} batteries={batteries} />
+      )}
+    </>
+  );
 }

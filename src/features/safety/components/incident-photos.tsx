@@ -1,11 +1,11 @@
 import { useState } from 'react';
 import { INCIDENT_PHOTO_MAX_BYTES, INCIDENT_PHOTOS_MAX, type IncidentJson, type IncidentPhotoJson } from '@shared/schemas/incidents';
-import { PhotoIcon, TrashIcon } from '../../../components/ui/action-icons';
+import { TrashIcon } from '../../../components/ui/action-icons';
 import { Button } from '../../../components/ui/button';
 import { Dialog } from '../../../components/ui/dialog';
 import { ErrorNotice } from '../../../components/ui/error-notice';
-import { PhotoPicker, photoProblem } from '../../../components/ui/photo-picker';
-import { isApiError } from '../../../lib/api-client';
+import { PhotoPicker, photoUploadMessage, useAddPhoto } from '../../../components/ui/photo-picker';
+import { PhotoThumbLink } from '../../../components/ui/photo-thumb';
 import { useCan } from '../../../lib/authorization';
 import { incidentPhotoUrl } from '../api/get-incident';
 import { useDeleteIncidentPhoto, useUploadIncidentPhoto } from '../api/incident-photos';
@@ -14,19 +14,12 @@ function PhotoTile({ incidentId, photo, position, onRemove }: { incidentId: stri
   const name = `Photo ${position} of the report`;
   return (
     <li className="flex flex-col gap-1.5">
-      <a href={incidentPhotoUrl(incidentId, photo.id, 'full')} target="_blank" rel="noopener" className="block overflow-hidden rounded-xl border-2 border-line bg-sunken">
-        {photo.hasThumb ? (
-          <img src={incidentPhotoUrl(incidentId, photo.id, 'thumb')} alt={name} loading="lazy" className="aspect-[4/3] w-full object-cover" />
-        ) : (
-          // A HEIC the server could not read: no preview, but the photo opens on devices that show it.
-          <span className="flex aspect-[4/3] w-full flex-col items-center justify-center gap-1 p-2 text-center">
-            <PhotoIcon className="size-9 text-ink-muted" />
-            <span className="font-semibold">Photo</span>
-            <span className="text-sm text-accent-ink underline">Open it</span>
-            <span className="sr-only">{name}</span>
-          </span>
-        )}
-      </a>
+      <PhotoThumbLink
+        href={incidentPhotoUrl(incidentId, photo.id, 'full')}
+        thumbSrc={photo.hasThumb ? incidentPhotoUrl(incidentId, photo.id, 'thumb') : null}
+        name={name}
+        contentType={photo.contentType}
+      />
       {onRemove && (
         <Button variant="quiet" className="-ml-4 self-start" icon={<TrashIcon className="size-5" />} onClick={onRemove}>
           Remove<span className="sr-only"> {name.toLowerCase()}</span>
@@ -42,15 +35,8 @@ export function IncidentPhotos({ incident }: { incident: IncidentJson }) {
   const upload = useUploadIncidentPhoto(incident.id);
   const remove = useDeleteIncidentPhoto(incident.id);
   const [removing, setRemoving] = useState<IncidentPhotoJson | null>(null);
-  const [tooBig, setTooBig] = useState<string | null>(null);
   const full = incident.photos.length >= INCIDENT_PHOTOS_MAX;
-  const uploadMessage = isApiError(upload.error) ? (upload.error.fields.photo ?? upload.error.message) : upload.error?.message;
-
-  function add(file: File) {
-    const problem = photoProblem(file, INCIDENT_PHOTO_MAX_BYTES);
-    setTooBig(problem);
-    if (!problem) upload.mutate(file);
-  }
+  const { add, tooBig } = useAddPhoto(upload.mutate, INCIDENT_PHOTO_MAX_BYTES);
 
   return (
     <section aria-labelledby="incident-photos-title" className="flex flex-col gap-3">
@@ -70,7 +56,7 @@ export function IncidentPhotos({ incident }: { incident: IncidentJson }) {
         </ul>
       )}
       {tooBig && <p className="font-semibold text-danger">{tooBig}</p>}
-      {upload.isError && <ErrorNotice title="The photo was not added" error={new Error(uploadMessage ?? 'Something went wrong.')} />}
+      {upload.isError && <ErrorNotice title="The photo was not added" error={new Error(photoUploadMessage(upload.error) ?? 'Something went wrong.')} />}
       {remove.isError && <ErrorNotice title="The photo was not removed" error={remove.error} />}
       <Dialog
         open={removing !== null}

@@ -6,9 +6,8 @@ import { Loading } from '../../../components/ui/loading';
 import { useViewer } from '../../../lib/authorization';
 import { useIncidents } from '../api/get-incidents';
 import { CLASS_LABELS, formatDay, formatWhen, personLabel, STATUS_LABELS, treatmentsText } from './incident-words';
-import { filterEventName, useLogFilter, type SafetyEvent } from './safety-event';
+import { filterEventName, timeZoneIn, useLogFilter, type SafetyEvent } from './safety-event';
 
-const here = Intl.DateTimeFormat().resolvedOptions().timeZone;
 const cell = 'border border-line-strong p-2 align-top print:border-black';
 
 function Row({ incident, timeZone }: { incident: IncidentJson; timeZone: string }) {
@@ -50,7 +49,7 @@ export function SafetyPrintPage({ events }: { events: SafetyEvent[] }) {
   const { membership } = useViewer();
   const [filter] = useLogFilter(events);
   const incidents = useIncidents({ eventId: filter.eventId });
-  const timeZoneOf = (eventId: string | null) => events.find((event) => event.id === eventId)?.timeZone ?? here;
+  const timeZoneOf = timeZoneIn(events);
   return (
     <article aria-labelledby="print-title" className="flex flex-col gap-4 print:text-black">
       <div className="flex flex-wrap items-center gap-3 print:hidden">

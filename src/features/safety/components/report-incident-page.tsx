@@ -4,8 +4,9 @@ import { INCIDENT_PHOTO_MAX_BYTES, INCIDENT_PHOTOS_MAX } from '@shared/schemas/i
 import { Button, LinkButton } from '../../../components/ui/button';
 import { ErrorNotice } from '../../../components/ui/error-notice';
 import { PageHeader } from '../../../components/ui/page-header';
-import { PhotoPicker, PickedPhoto, photoProblem } from '../../../components/ui/photo-picker';
+import { PhotoPicker, PickedPhoto, photoProblem, photoUploadMessage } from '../../../components/ui/photo-picker';
 import { isApiError } from '../../../lib/api-client';
+import { useFocusFirstInvalid } from '../../../lib/focus-invalid';
 import type { FieldErrors } from '../../../lib/form-errors';
 import { newId } from '../../../lib/new-id';
 import { serverNow } from '../../../lib/server-clock';
@@ -42,6 +43,7 @@ export function ReportIncidentPage({ eventId, timeZone, batteries }: ReportIncid
   const [photoError, setPhotoError] = useState<string | null>(null);
   const created = create.isSuccess;
   const errors = reportErrorsOf(clientErrors, create.error);
+  const form = useFocusFirstInvalid(clientErrors, create.error);
   const set = <K extends keyof ReportValues>(field: K) => (value: ReportValues[K]) => setValues((old) => ({ ...old, [field]: value }));
   const openReport = () => navigate(`/safety/incidents/${id}`);
 
@@ -69,14 +71,14 @@ export function ReportIncidentPage({ eventId, timeZone, batteries }: ReportIncid
     if (!problem) setPhotos((old) => [...old, file]);
   }
 
-  const uploadMessage = isApiError(upload.error) ? (upload.error.fields.photo ?? upload.error.message) : upload.error?.message;
+  const uploadMessage = photoUploadMessage(upload.error);
   const saveProblem = create.error && !(isApiError(create.error, 'invalid') && Object.keys(errors).length > 0) ? create.error : null;
   const invalid = Object.keys(errors).length > 0;
 
   return (
     <>
       <PageHeader title="Report an incident" description="Anyone can report. Say what you know now; the safety captain follows it up." />
-      <form noValidate onSubmit={submit} className="flex max-w-3xl flex-col gap-6">
+      <form ref={form} noValidate onSubmit={submit} className="flex max-w-3xl flex-col gap-6">
         <ReportFields values={values} onChange={set} errors={errors} batteries={batteries} timeHint="Now, unless you change it." />
         <div className={areaClass}>
           <p className="font-semibold">Photos (optional)</p>

@@ -1,5 +1,5 @@
 import type { ReactNode } from 'react';
-import { AlertIcon } from '../../../components/ui/icons';
+import { FirstThingsFirst } from '../../../components/ui/first-things-first';
 import { AirIcon, DropIcon, GogglesIcon } from '../../../components/ui/safety-icons';
 
 function Caution({ icon, children }: { icon: ReactNode; children: ReactNode }) {
@@ -31,21 +31,5 @@ export function SafetyCautions() {
       </ul>
       <FirstThingsFirst />
     </aside>
-  );
-}
-
-/**
- * What the class and the log are, and what is not: said wherever a class is shown, so nobody takes
- * the team's record for the event's or a doctor's word.
- */
-export function FirstThingsFirst() {
-  return (
-    <p className="flex items-start gap-3 rounded-xl bg-sunken p-3 font-semibold">
-      <AlertIcon className="mt-0.5 size-6" />
-      <span>
-        Local rules, event staff and licensed medical advice come first. The classification here is the team&apos;s own, for its records and alerts: it is not an official
-        log.
-      </span>
-    </p>
   );
 }

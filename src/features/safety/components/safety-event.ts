@@ -1,5 +1,6 @@
 import { useSearchParams } from 'react-router';
 import { INCIDENT_STATUSES, type IncidentStatus } from '@shared/schemas/incidents';
+import { deviceTimeZone } from '../../../lib/dates';
 import type { IncidentFilter } from '../api/incidents-cache';
 
 /** An event as the safety area names it (from the events feature, through the route). */
@@ -31,3 +32,9 @@ export function useLogFilter(events: SafetyEvent[]): [IncidentFilter, (filter: I
 
 /** "Fenwick Valley Qualifier" or "Every event". */
 export const filterEventName = (events: SafetyEvent[], eventId: string) => (eventId === 'all' ? 'Every event' : (events.find((event) => event.id === eventId)?.name ?? 'This event'));
+
+/** Whose clock a report is read on: its event's, else this device's (a report outside any event). */
+export const timeZoneIn =
+  (events: SafetyEvent[] | undefined) =>
+  (eventId: string | null): string =>
+    events?.find((event) => event.id === eventId)?.timeZone ?? deviceTimeZone();

@@ -1,4 +1,4 @@
-import { LinkButton } from '../../../components/ui/button';
+import { buttonClass, LinkButton } from '../../../components/ui/button';
 import { PrintIcon } from '../../../components/ui/action-icons';
 import { PlusIcon } from '../../../components/ui/icons';
 import { PageHeader } from '../../../components/ui/page-header';
@@ -7,13 +7,7 @@ import { incidentsCsvUrl } from '../api/get-incidents';
 import { IncidentLog } from './incident-log';
 import { LogFilters } from './log-filters';
 import { SafetyCautions } from './safety-cautions';
-import { useLogFilter, type SafetyEvent } from './safety-event';
-
-// The device's zone for a report outside any event.
-const here = Intl.DateTimeFormat().resolvedOptions().timeZone;
-
-const secondaryLink =
-  'inline-flex min-h-12 items-center justify-center gap-2 rounded-xl border-2 border-line-strong bg-surface px-4 font-semibold text-ink hover:bg-sunken active:bg-sunken';
+import { timeZoneIn, useLogFilter, type SafetyEvent } from './safety-event';
 
 function ReportButton() {
   return (
@@ -42,7 +36,7 @@ function WhatHappens() {
 
 function SafetyLog({ events }: { events: SafetyEvent[] }) {
   const [filter, setFilter] = useLogFilter(events);
-  const timeZoneOf = (eventId: string | null) => events.find((event) => event.id === eventId)?.timeZone ?? here;
+  const timeZoneOf = timeZoneIn(events);
   const printSearch = new URLSearchParams({ eventId: filter.eventId });
   return (
     <section aria-labelledby="safety-log-title" className="flex flex-col gap-4">
@@ -52,7 +46,7 @@ function SafetyLog({ events }: { events: SafetyEvent[] }) {
         </h2>
         <div className="flex flex-wrap gap-3">
           {/* A plain link: the browser saves the file with the server's name for it. */}
-          <a href={incidentsCsvUrl(filter.eventId)} download className={secondaryLink}>
+          <a href={incidentsCsvUrl(filter.eventId)} download className={buttonClass('secondary')}>
             Download CSV
           </a>
           <LinkButton to={`/safety/print?${printSearch}`} variant="secondary" icon={<PrintIcon className="size-5" />}>

@@ -13,6 +13,12 @@ export interface IncidentEdit {
   /** What the person asked for, in words that follow "Your change:", e.g. "tick ‘Replace the bench fan’". */
   what: string;
   apply: (incident: IncidentJson) => Omit<IncidentChanges, 'version'>;
+  /**
+   * Whether a version already holds the change: after a lost answer, the page (refreshed by the
+   * socket) or a stale answer shows the first send went through, and sending it again would
+   * repeat it (a second follow-up) or report its own save as someone else's.
+   */
+  isIn?: (incident: IncidentJson) => boolean;
   onSaved?: () => void;
   /** After the answer, whatever it was (a tick shown at once goes back to what the page has). */
   onSettled?: () => void;
@@ -36,8 +42,18 @@ export function useIncidentWrite(incident: IncidentJson) {
   const [conflict, setConflict] = useState<Conflict | null>(null);
   const [active, setActive] = useState<IncidentEdit | null>(null);
 
+  function saved(edit: IncidentEdit) {
+    setConflict(null);
+    update.reset();
+    edit.onSaved?.();
+  }
+
   function send(edit: IncidentEdit, on: IncidentJson) {
     setActive(edit);
+    if (edit.isIn?.(on)) {
+      saved(edit);
+      return edit.onSettled?.();
+    }
     update.mutate(
       { ...edit.apply(on), version: on.version },
       {
@@ -47,6 +63,7 @@ export function useIncidentWrite(incident: IncidentJson) {
         },
         onError: (error) => {
           const theirs = staleIncident(error);
+          if (theirs && edit.isIn?.(theirs)) return saved(edit);
           setConflict(theirs ? { edit, base: on, theirs } : null);
         },
         onSettled: edit.onSettled,

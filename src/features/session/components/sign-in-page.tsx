@@ -4,12 +4,12 @@ import { signInSchema } from '@shared/schemas/session';
 import { Button, LinkButton } from '../../../components/ui/button';
 import { ErrorNotice } from '../../../components/ui/error-notice';
 import { TextField } from '../../../components/ui/field';
+import { PasswordInput } from '../../../components/ui/password-input';
 import { SignedOutPage, signedOutPanelClass } from '../../../components/ui/signed-out-page';
 import { isApiError } from '../../../lib/api-client';
 import { mergeFieldErrors, parseForm, type FieldErrors } from '../../../lib/form-errors';
 import { safeNext } from '../../../lib/safe-next';
 import { useSignIn } from '../api/sign-in';
-import { PasswordInput } from '../../../components/ui/password-input';
 
 function explain(error: unknown): unknown {
   if (isApiError(error, 'rate_limited') && error.retryAfterSeconds) {

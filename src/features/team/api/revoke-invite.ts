@@ -1,5 +1,5 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { api } from '../../../lib/api-client';
+import { api, isNotFound } from '../../../lib/api-client';
 import { invitesQueryOptions } from './get-invites';
 
 /** The invite's link stops working at once; the person can be invited again later. */
@@ -11,6 +11,9 @@ export function useRevokeInvite() {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: revokeInvite,
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: invitesQueryOptions().queryKey }),
+    // A 404 too: an invite revoked already (by a tap whose answer was lost) or used meanwhile is gone.
+    onSettled: (_answer, error) => {
+      if (!error || isNotFound(error)) void queryClient.invalidateQueries({ queryKey: invitesQueryOptions().queryKey });
+    },
   });
 }

@@ -6,7 +6,7 @@ import { ErrorNotice } from '../../../components/ui/error-notice';
 import { AlertIcon, CheckIcon } from '../../../components/ui/icons';
 import { isApiError } from '../../../lib/api-client';
 import { mergeFieldErrors, parseForm, type FieldErrors } from '../../../lib/form-errors';
-import { useUpdateAlertRule } from '../api/update-alert-rule';
+import { staleAlertRule, useUpdateAlertRule } from '../api/update-alert-rule';
 import { ExtraAddresses, readAddress } from './extra-addresses';
 import { RoleCheckboxes } from './role-checkboxes';
 
@@ -17,6 +17,14 @@ interface Draft {
   version: number;
 }
 
+const sameSet = (a: readonly string[], b: readonly string[]) => a.length === b.length && a.every((each) => b.includes(each));
+
+/** Whether a stale answer's rule already says what was sent: the send before, whose answer was lost, saved it. */
+function holds(error: unknown, sent: Pick<AlertRuleJson, 'roles' | 'extraAddresses'>): boolean {
+  const current = staleAlertRule(error);
+  return !!current && sameSet(current.roles, sent.roles) && sameSet(current.extraAddresses, sent.extraAddresses);
+}
+
 /** One rule: which roles and which other addresses get the e-mail. Saved whole, with the version it was loaded at. */
 export function AlertRuleForm({ rule }: { rule: AlertRuleJson }) {
   const update = useUpdateAlertRule();
@@ -25,7 +33,8 @@ export function AlertRuleForm({ rule }: { rule: AlertRuleJson }) {
   const [draft, setDraft] = useState<Draft | null>(null);
   const [typed, setTyped] = useState('');
   const [clientErrors, setClientErrors] = useState<FieldErrors>({});
-  const stale = isApiError(update.error, 'stale');
+  const [savedBefore, setSavedBefore] = useState(false);
+  const stale = isApiError(update.error, 'stale') && !savedBefore;
   const errors = mergeFieldErrors(clientErrors, update.error);
   const shown = draft ?? rule;
   const changed = draft !== null || typed.trim() !== '';
@@ -33,11 +42,13 @@ export function AlertRuleForm({ rule }: { rule: AlertRuleJson }) {
 
   function edit(change: Partial<Pick<Draft, 'roles' | 'extraAddresses'>>) {
     update.reset();
+    setSavedBefore(false);
     setDraft({ roles: shown.roles, extraAddresses: shown.extraAddresses, version: shown.version, ...change });
   }
 
   function startOver() {
     update.reset();
+    setSavedBefore(false);
     setClientErrors({});
     setDraft(null);
     setTyped('');
@@ -60,7 +71,18 @@ export function AlertRuleForm({ rule }: { rule: AlertRuleJson }) {
     // What was typed is in the list from here on, so an error about it lands beside it.
     setDraft({ roles: shown.roles, extraAddresses, version: shown.version });
     setTyped('');
-    update.mutate({ key: rule.key, ...parsed.data }, { onSuccess: () => setDraft(null) });
+    setSavedBefore(false);
+    update.mutate(
+      { key: rule.key, ...parsed.data },
+      {
+        onSuccess: () => setDraft(null),
+        onError: (error) => {
+          if (!holds(error, parsed.data)) return;
+          setSavedBefore(true);
+          setDraft(null);
+        },
+      },
+    );
   }
 
   return (
@@ -99,9 +121,9 @@ export function AlertRuleForm({ rule }: { rule: AlertRuleJson }) {
           </div>
         </div>
       ) : (
-        update.isError && <ErrorNotice error={update.error} title="The rule was not saved" />
+        update.isError && !savedBefore && <ErrorNotice error={update.error} title="The rule was not saved" />
       )}
-      {update.isSuccess && !changed && (
+      {(update.isSuccess || savedBefore) && !changed && (
         <p role="status" className="flex items-center gap-2 font-semibold text-ok">
           <CheckIcon /> Saved.
         </p>

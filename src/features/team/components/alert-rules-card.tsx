@@ -1,6 +1,7 @@
 import { ALERT_RULE_KEYS } from '@shared/schemas/mail';
 import { Card } from '../../../components/ui/card';
 import { ErrorNotice } from '../../../components/ui/error-notice';
+import { FirstThingsFirst } from '../../../components/ui/first-things-first';
 import { Loading } from '../../../components/ui/loading';
 import { useAlertRules } from '../api/get-alert-rules';
 import { AlertRuleForm } from './alert-rule-form';
@@ -17,16 +18,26 @@ export function AlertRulesCard() {
         Who gets an e-mail when an incident is reported. The mail says what kind of incident, where and when, with a
         link to the report; never the names of people or the description.
       </p>
+      {/* The rules are named after the classes: what those classes are, and are not. */}
+      <div className="mt-4">
+        <FirstThingsFirst />
+      </div>
       {rules.isPending && <Loading label="Loading the alert rules" />}
       {rules.isError && (
         <div className="mt-4">
-          <ErrorNotice title="Could not load the alert rules" error={rules.error} onRetry={() => rules.refetch()} retrying={rules.isFetching} />
+          <ErrorNotice
+            title={rules.data ? 'Could not reload the alert rules: these are as they were' : 'Could not load the alert rules'}
+            error={rules.error}
+            onRetry={() => rules.refetch()}
+            retrying={rules.isFetching}
+          />
         </div>
       )}
-      {rules.isSuccess && (
+      {/* Kept through a refetch that fails on the arena Wi-Fi: a rule being changed stays as it is. */}
+      {rules.data && (
         <div className="divide-y divide-line">
           {ALERT_RULE_KEYS.map((key) => {
-            const rule = rules.data.rules.find((each) => each.key === key);
+            const rule = rules.data?.rules.find((each) => each.key === key);
             return rule && <AlertRuleForm key={key} rule={rule} />;
           })}
         </div>

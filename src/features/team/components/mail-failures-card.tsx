@@ -3,6 +3,7 @@ import type { MailFailureJson, MailKind } from '@shared/schemas/mail';
 import { Button, LinkButton } from '../../../components/ui/button';
 import { ErrorNotice } from '../../../components/ui/error-notice';
 import { AlertIcon, CheckIcon } from '../../../components/ui/icons';
+import { isNotFound } from '../../../lib/api-client';
 import { formatDateTime } from '../../../lib/dates';
 import { useDismissMailFailure } from '../api/dismiss-mail-failure';
 import { useMailFailures } from '../api/get-mail-failures';
@@ -17,6 +18,7 @@ const KIND_LABELS: Record<MailKind, string> = {
 function FailureRow({ failure, onDone }: { failure: MailFailureJson; onDone: (note: string) => void }) {
   const retry = useRetryMailFailure();
   const dismiss = useDismissMailFailure();
+  const handledAlready = (error: unknown) => isNotFound(error) && onDone(`The mail to ${failure.to} was retried or dismissed already.`);
   const attempts = `${failure.attempts} ${failure.attempts === 1 ? 'try' : 'tries'}`;
   return (
     <li className="flex flex-col gap-3 rounded-xl border border-line bg-surface p-4">
@@ -29,12 +31,12 @@ function FailureRow({ failure, onDone }: { failure: MailFailureJson; onDone: (no
           Given up {formatDateTime(failure.failedAt)} after {attempts}. <span className="break-words">{failure.lastError}</span>
         </p>
       </div>
-      {(retry.isError || dismiss.isError) && <ErrorNotice error={retry.error ?? dismiss.error} />}
+      {(retry.isError || dismiss.isError) && !isNotFound(retry.error ?? dismiss.error) && <ErrorNotice error={retry.error ?? dismiss.error} />}
       <div className="flex flex-wrap gap-3">
-        <Button pending={retry.isPending} onClick={() => retry.mutate(failure.id, { onSuccess: () => onDone(`Sending again to ${failure.to}.`) })}>
+        <Button pending={retry.isPending} onClick={() => retry.mutate(failure.id, { onSuccess: () => onDone(`Sending again to ${failure.to}.`), onError: handledAlready })}>
           Retry
         </Button>
-        <Button variant="secondary" pending={dismiss.isPending} onClick={() => dismiss.mutate(failure.id, { onSuccess: () => onDone(`Dismissed the mail to ${failure.to}.`) })}>
+        <Button variant="secondary" pending={dismiss.isPending} onClick={() => dismiss.mutate(failure.id, { onSuccess: () => onDone(`Dismissed the mail to ${failure.to}.`), onError: handledAlready })}>
           Dismiss
         </Button>
         {failure.incidentId && (

@@ -5,6 +5,7 @@ import { Button } from '../../../components/ui/button';
 import { Card } from '../../../components/ui/card';
 import { Dialog } from '../../../components/ui/dialog';
 import { ErrorNotice } from '../../../components/ui/error-notice';
+import { isNotFound } from '../../../lib/api-client';
 import { formatDateTime } from '../../../lib/dates';
 import { useInvites } from '../api/get-invites';
 import { useRevokeInvite } from '../api/revoke-invite';
@@ -39,7 +40,7 @@ function InviteRow({ invite }: { invite: InviteJson }) {
             <Button variant="secondary" onClick={() => setConfirming(false)}>
               Keep it
             </Button>
-            <Button variant="danger" pending={revoke.isPending} onClick={() => revoke.mutate(invite.id, { onSuccess: () => setConfirming(false) })}>
+            <Button variant="danger" pending={revoke.isPending} onClick={() => revoke.mutate(invite.id, { onSettled: (_answer, error) => (!error || isNotFound(error)) && setConfirming(false) })}>
               Revoke
             </Button>
           </>
