@@ -4,7 +4,7 @@ import { inTransaction } from '../db/transaction';
 import { HttpError } from '../errors';
 import { announceIncident } from '../incidents/announce';
 import { Incident, IncidentPhoto, Team } from '../models';
-import { keepPhoto } from '../photos/keep-photo';
+import { keepPhoto, photoRowFields } from '../photos/keep-photo';
 import type { ProcessedPhoto } from '../photos/photo-processing';
 import type { PhotoStore } from '../photos/photo-store';
 import { presentIncidentPhoto } from '../presenters/incident';
@@ -27,16 +27,7 @@ export async function addIncidentPhoto(teamId: string, userId: string, incidentI
       const incident = await Incident.ofTeam(teamId, incidentId, { transaction });
       await assertRoomForIncidentPhoto(incident.id, transaction);
       const row = await IncidentPhoto.create(
-        {
-          id: photoId,
-          incidentId: incident.id,
-          uploadedById: userId,
-          contentType: photo.contentType,
-          byteSize: photo.original.length,
-          width: photo.width,
-          height: photo.height,
-          hasThumb: photo.thumb !== null,
-        },
+        { ...photoRowFields(photoId, userId, photo), incidentId: incident.id },
         { transaction },
       );
       transaction.afterCommit(() => announceIncident(teamId, incident.id));

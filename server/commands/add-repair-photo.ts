@@ -4,7 +4,7 @@ import { inTransaction } from '../db/transaction';
 import { HttpError } from '../errors';
 import { Repair, RepairChange, RepairPhoto, Team } from '../models';
 import { presentOnePhoto } from '../presenters/repair';
-import { keepPhoto } from '../photos/keep-photo';
+import { keepPhoto, photoRowFields } from '../photos/keep-photo';
 import type { ProcessedPhoto } from '../photos/photo-processing';
 import type { PhotoStore } from '../photos/photo-store';
 import { announceChanged } from './repair-announce';
@@ -30,17 +30,7 @@ export async function addRepairPhoto(teamId: string, userId: string, repairId: s
       await assertRoomForPhoto(repair.id, transaction);
       const now = new Date();
       const row = await RepairPhoto.create(
-        {
-          id: photoId,
-          repairId: repair.id,
-          uploadedById: userId,
-          contentType: photo.contentType,
-          byteSize: photo.original.length,
-          width: photo.width,
-          height: photo.height,
-          hasThumb: photo.thumb !== null,
-          createdAt: now,
-        },
+        { ...photoRowFields(photoId, userId, photo), repairId: repair.id, createdAt: now },
         { transaction },
       );
       await RepairChange.create({ repairId: repair.id, kind: 'photo_added', changes: { photo: [null, photoId] }, byId: userId, at: now }, { transaction });
