@@ -1,4 +1,6 @@
 import { PhotoIcon } from './action-icons';
+import { Button } from './button';
+import { Dialog } from './dialog';
 
 interface PhotoThumbLinkProps {
   /** The full photo, opened in a new tab. */
@@ -26,5 +28,37 @@ export function PhotoThumbLink({ href, thumbSrc, name, contentType }: PhotoThumb
         </span>
       )}
     </a>
+  );
+}
+
+interface RemovePhotoDialogProps {
+  open: boolean;
+  pending: boolean;
+  onKeep: () => void;
+  onRemove: () => void;
+  /** What removing it means where the photo is, e.g. "It goes from the report for everyone." */
+  consequence: string;
+}
+
+/** The question before a photo is removed, as repair tickets and incident reports ask it. */
+export function RemovePhotoDialog({ open, pending, onKeep, onRemove, consequence }: RemovePhotoDialogProps) {
+  return (
+    <Dialog
+      open={open}
+      title="Remove this photo?"
+      onClose={onKeep}
+      actions={
+        <>
+          <Button variant="secondary" onClick={onKeep}>
+            Keep it
+          </Button>
+          <Button variant="danger" pending={pending} onClick={onRemove}>
+            Remove photo
+          </Button>
+        </>
+      }
+    >
+      <p>{consequence}</p>
+    </Dialog>
   );
 }

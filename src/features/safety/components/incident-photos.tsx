@@ -2,10 +2,9 @@ import { useState } from 'react';
 import { INCIDENT_PHOTO_MAX_BYTES, INCIDENT_PHOTOS_MAX, type IncidentJson, type IncidentPhotoJson } from '@shared/schemas/incidents';
 import { TrashIcon } from '../../../components/ui/action-icons';
 import { Button } from '../../../components/ui/button';
-import { Dialog } from '../../../components/ui/dialog';
 import { ErrorNotice } from '../../../components/ui/error-notice';
 import { PhotoPicker, photoUploadMessage, useAddPhoto } from '../../../components/ui/photo-picker';
-import { PhotoThumbLink } from '../../../components/ui/photo-thumb';
+import { PhotoThumbLink, RemovePhotoDialog } from '../../../components/ui/photo-thumb';
 import { useCan } from '../../../lib/authorization';
 import { incidentPhotoUrl } from '../api/get-incident';
 import { useDeleteIncidentPhoto, useUploadIncidentPhoto } from '../api/incident-photos';
@@ -58,23 +57,13 @@ export function IncidentPhotos({ incident }: { incident: IncidentJson }) {
       {tooBig && <p className="font-semibold text-danger">{tooBig}</p>}
       {upload.isError && <ErrorNotice title="The photo was not added" error={new Error(photoUploadMessage(upload.error) ?? 'Something went wrong.')} />}
       {remove.isError && <ErrorNotice title="The photo was not removed" error={remove.error} />}
-      <Dialog
+      <RemovePhotoDialog
         open={removing !== null}
-        title="Remove this photo?"
-        onClose={() => setRemoving(null)}
-        actions={
-          <>
-            <Button variant="secondary" onClick={() => setRemoving(null)}>
-              Keep it
-            </Button>
-            <Button variant="danger" pending={remove.isPending} onClick={() => removing && remove.mutate(removing.id, { onSettled: () => setRemoving(null) })}>
-              Remove photo
-            </Button>
-          </>
-        }
-      >
-        <p>It goes from the report for everyone.</p>
-      </Dialog>
+        pending={remove.isPending}
+        onKeep={() => setRemoving(null)}
+        onRemove={() => removing && remove.mutate(removing.id, { onSettled: () => setRemoving(null) })}
+        consequence="It goes from the report for everyone."
+      />
     </section>
   );
 }
